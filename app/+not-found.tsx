@@ -1,0 +1,5 @@
+import { NotFoundScreen } from '../features/ui';
+
+export default function NotFound() {
+  return <NotFoundScreen />;
+}

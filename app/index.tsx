@@ -1,0 +1,5 @@
+import { DriverListScreen } from '../features/drivers';
+
+export default function Index() {
+  return <DriverListScreen />;
+}

@@ -1,0 +1,79 @@
+import { mkdirSync, mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { chromium, type BrowserContext, type Locator, type Page } from 'playwright-core';
+
+export const artifactsDir = join(__dirname, '..', '..', 'artifacts', 'e2e');
+
+// Flags that keep Debian's Chromium from reaching for the network on a closed machine.
+const quietFlags = [
+  '--headless=new', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking',
+  '--disable-component-update', '--disable-sync', '--disable-default-apps', '--disable-dev-shm-usage',
+];
+
+export function baseUrl(): string {
+  const url = process.env.E2E_BASE_URL;
+  if (!url) throw new Error('E2E_BASE_URL is not set; the e2e global setup starts the server');
+  return url;
+}
+
+export interface BrowserSession {
+  context: BrowserContext;
+  page: Page;
+  close: () => Promise<void>;
+  errors: string[];
+}
+
+/** A fresh browser profile per session, so cookies and storage never leak between flows. */
+export async function openBrowser(viewport: { width: number; height: number }): Promise<BrowserSession> {
+  const profile = mkdtempSync(join(tmpdir(), 'conestack-e2e-'));
+  const context = await chromium.launchPersistentContext(profile, {
+    executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
+    args: quietFlags,
+    viewport,
+    acceptDownloads: true,
+  });
+  const page = context.pages()[0] ?? (await context.newPage());
+  const errors: string[] = [];
+  page.on('pageerror', (e) => errors.push(e.message));
+  return {
+    context,
+    page,
+    errors,
+    close: async () => {
+      await context.close();
+      rmSync(profile, { recursive: true, force: true });
+    },
+  };
+}
+
+export function screenshotPath(name: string): string {
+  mkdirSync(artifactsDir, { recursive: true });
+  return join(artifactsDir, `${name}.png`);
+}
+
+/** Counts canvas pixels that differ from the background, read back from the page itself. */
+export async function canvasInkPixels(target: Locator): Promise<number> {
+  const page = target.page();
+  const shot = await target.first().screenshot();
+  // Decode the PNG in the browser, where an image decoder is built in. Passed as text so the test
+  // transpiler cannot rewrite it into helpers the page does not have.
+  const script = `(async () => {
+    const img = new Image();
+    img.src = 'data:image/png;base64,${shot.toString('base64')}';
+    await img.decode();
+    const c = document.createElement('canvas');
+    c.width = img.width;
+    c.height = img.height;
+    const ctx = c.getContext('2d');
+    ctx.drawImage(img, 0, 0);
+    const data = ctx.getImageData(0, 0, c.width, c.height).data;
+    const r0 = data[0], g0 = data[1], b0 = data[2];
+    let n = 0;
+    for (let i = 0; i < data.length; i += 4) {
+      if (Math.abs(data[i] - r0) + Math.abs(data[i + 1] - g0) + Math.abs(data[i + 2] - b0) > 60) n++;
+    }
+    return n;
+  })()`;
+  return page.evaluate<number>(script);
+}

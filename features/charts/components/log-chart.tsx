@@ -1,0 +1,56 @@
+import { WithSkiaWeb } from '@shopify/react-native-skia/lib/module/web';
+import { useState } from 'react';
+import { StyleSheet, Text, View, type LayoutChangeEvent } from 'react-native';
+import { ClientOnly, colors, fonts } from '../../ui';
+import type { ChartSeries } from '../chart-math';
+import { useChartGeometry } from '../hooks/use-chart-geometry';
+
+export interface LogChartProps {
+  testID?: string;
+  title: string;
+  series: readonly ChartSeries[];
+  xDomain?: readonly [number, number];
+  yDomain?: readonly [number, number];
+  yStep?: number;
+  yUnit: string;
+  height?: number;
+}
+
+const DEFAULT_X: readonly [number, number] = [20, 20000];
+// CanvasKit is fetched from the app's own origin; nothing is loaded from elsewhere.
+const skiaOptions = { locateFile: (file: string) => `/${file}` };
+const loadCanvas = () => import('./log-chart-canvas').then((m) => ({ default: m.LogChartCanvas }));
+
+/** A log-frequency chart that sizes itself to its container and draws with Skia once mounted. */
+export function LogChart({ testID, title, series, xDomain = DEFAULT_X, yDomain, yStep, yUnit, height = 260 }: LogChartProps) {
+  const [width, setWidth] = useState(0);
+  const geometry = useChartGeometry(series, { width, height, xDomain, yDomain, yStep });
+  const onLayout = (e: LayoutChangeEvent) => setWidth(Math.floor(e.nativeEvent.layout.width));
+  return (
+    <View style={styles.wrap} testID={testID}>
+      <View style={styles.head}>
+        <Text style={styles.title}>{title}</Text>
+        <Text style={styles.units}>{yUnit} against frequency (Hz)</Text>
+      </View>
+      <View style={{ height }} onLayout={onLayout}>
+        {width > 0 ? (
+          <ClientOnly>
+            <WithSkiaWeb
+              opts={skiaOptions}
+              getComponent={loadCanvas}
+              fallback={<View style={{ width, height }} />}
+              componentProps={{ geometry, width, height }}
+            />
+          </ClientOnly>
+        ) : null}
+      </View>
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  wrap: { backgroundColor: colors.card, borderRadius: 10, borderWidth: 1, borderColor: colors.rule, padding: 10, gap: 6 },
+  head: { flexDirection: 'row', flexWrap: 'wrap', justifyContent: 'space-between', alignItems: 'baseline', gap: 6 },
+  title: { fontFamily: fonts.semibold, fontSize: 14, color: colors.ink },
+  units: { fontFamily: fonts.regular, fontSize: 12, color: colors.inkSoft },
+});

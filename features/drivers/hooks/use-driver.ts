@@ -1,0 +1,7 @@
+import useSWR from 'swr';
+import type { DriverDetail } from '../../../shared/schemas/drivers';
+import { driverPath } from '../api/drivers-api';
+
+export function useDriver(slug: string | undefined) {
+  return useSWR<DriverDetail>(slug ? driverPath(slug) : null);
+}

@@ -1,0 +1,5 @@
+import { ensureDependencies } from './lib/deps.mjs';
+import { ensureWebBuild } from './lib/web.mjs';
+
+ensureDependencies();
+ensureWebBuild();

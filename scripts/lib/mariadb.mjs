@@ -1,0 +1,132 @@
+// A private MariaDB for this checkout: data in .data/, bound to 127.0.0.1 on its own port.
+// Always pass --defaults-file so nothing is read from /etc/mysql and the system instance is never touched.
+import { spawn, spawnSync } from 'node:child_process';
+import { existsSync, mkdirSync, openSync, writeFileSync } from 'node:fs';
+import { join } from 'node:path';
+import { ensureDebianPackages, isRoot, log, root } from './run.mjs';
+
+const APP_USER = 'conestack';
+const APP_PASSWORD = 'conestack-local';
+
+export function mariadbConfig({ name, port, database }) {
+  const dir = join(root, '.data', name);
+  return {
+    dir,
+    dataDir: join(dir, 'data'),
+    cnf: join(dir, 'my.cnf'),
+    socket: join(dir, 'mysqld.sock'),
+    port,
+    database,
+    user: APP_USER,
+    password: APP_PASSWORD,
+  };
+}
+
+function writeCnf(cfg) {
+  mkdirSync(cfg.dataDir, { recursive: true });
+  const lines = [
+    '[mysqld]',
+    `datadir=${cfg.dataDir}`,
+    `socket=${cfg.socket}`,
+    `pid-file=${join(cfg.dir, 'mysqld.pid')}`,
+    `log-error=${join(cfg.dir, 'error.log')}`,
+    `port=${cfg.port}`,
+    'bind-address=127.0.0.1',
+    'skip-name-resolve',
+    'character-set-server=utf8mb4',
+    'collation-server=utf8mb4_unicode_ci',
+    'innodb_buffer_pool_size=256M',
+    'innodb_flush_log_at_trx_commit=2',
+    'max_connections=300',
+    'group_concat_max_len=67108864',
+    ...(isRoot() ? ['user=root'] : []),
+    '[client]',
+    `socket=${cfg.socket}`,
+    `port=${cfg.port}`,
+    '',
+  ];
+  writeFileSync(cfg.cnf, lines.join('\n'));
+}
+
+function admin(cfg, args) {
+  return spawnSync('mariadb-admin', [`--defaults-file=${cfg.cnf}`, '--user=root', ...args], { encoding: 'utf8' });
+}
+
+function ping(cfg) {
+  return admin(cfg, ['--connect-timeout=1', 'ping']).status === 0;
+}
+
+function sql(cfg, statement) {
+  const r = spawnSync('mariadb', [`--defaults-file=${cfg.cnf}`, '--user=root', '-e', statement], { encoding: 'utf8' });
+  if (r.status !== 0) throw new Error(`MariaDB statement failed: ${r.stderr}`);
+}
+
+const sleep = (ms) => new Promise((r) => setTimeout(r, ms));
+
+/**
+ * Starts the instance (installing the Debian package if needed) and makes sure the database and
+ * the app user exist. Resolves with `{ cfg, stop, startedHere }`.
+ */
+export async function startMariadb(options) {
+  ensureDebianPackages(['mariadb-server', 'mariadb-client'], 'the local database');
+  const cfg = mariadbConfig(options);
+  writeCnf(cfg);
+  let startedHere = false;
+  if (!ping(cfg)) {
+    if (!existsSync(join(cfg.dataDir, 'mysql'))) {
+      log(`initialising MariaDB data in ${cfg.dataDir}`);
+      const init = spawnSync(
+        'mariadb-install-db',
+        [`--defaults-file=${cfg.cnf}`, '--skip-test-db', '--auth-root-authentication-method=socket', ...(isRoot() ? ['--user=root'] : [])],
+        { encoding: 'utf8' },
+      );
+      if (init.status !== 0) throw new Error(`mariadb-install-db failed:\n${init.stdout}\n${init.stderr}`);
+    }
+    const out = openSync(join(cfg.dir, 'mariadbd.out'), 'a');
+    // Own process group: a Ctrl-C in the terminal must not kill it mid-write; we shut it down ourselves.
+    const child = spawn('mariadbd', [`--defaults-file=${cfg.cnf}`], { detached: true, stdio: ['ignore', out, out] });
+    child.unref();
+    startedHere = true;
+    let up = false;
+    for (let i = 0; i < 150; i++) {
+      if (ping(cfg)) {
+        up = true;
+        break;
+      }
+      if (child.exitCode !== null) break;
+      await sleep(100);
+    }
+    if (!up) throw new Error(`MariaDB did not start on 127.0.0.1:${cfg.port}; see ${join(cfg.dir, 'error.log')}`);
+    log(`MariaDB up on 127.0.0.1:${cfg.port}`);
+  } else {
+    log(`MariaDB already running on 127.0.0.1:${cfg.port}`);
+  }
+  sql(
+    cfg,
+    [
+      `CREATE DATABASE IF NOT EXISTS \`${cfg.database}\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci;`,
+      `CREATE USER IF NOT EXISTS '${cfg.user}'@'127.0.0.1' IDENTIFIED BY '${cfg.password}';`,
+      `GRANT ALL PRIVILEGES ON \`${cfg.database}\`.* TO '${cfg.user}'@'127.0.0.1';`,
+      `GRANT ALL PRIVILEGES ON \`${cfg.database}_scratch\`.* TO '${cfg.user}'@'127.0.0.1';`,
+      'FLUSH PRIVILEGES;',
+    ].join(' '),
+  );
+  const stop = async () => {
+    if (!startedHere) return;
+    const r = admin(cfg, ['shutdown']);
+    if (r.status !== 0) process.stderr.write(`[conestack] MariaDB shutdown: ${r.stderr}\n`);
+    for (let i = 0; i < 100 && ping(cfg); i++) await sleep(100);
+    log('MariaDB stopped');
+  };
+  return { cfg, stop, startedHere };
+}
+
+export function dbEnv(cfg) {
+  return {
+    DB_HOST: '127.0.0.1',
+    DB_PORT: String(cfg.port),
+    DB_USER: cfg.user,
+    DB_PASSWORD: cfg.password,
+    DB_NAME: cfg.database,
+  };
+}

@@ -1,0 +1,37 @@
+import express, { type Express } from 'express';
+import { existsSync } from 'node:fs';
+import { join } from 'node:path';
+import type { Knex } from 'knex';
+import { createDriversRouter } from './drivers/router';
+import { createHealthRouter } from './health/router';
+import { apiNotFound, errorHandler } from './http/error-handler';
+
+export interface AppOptions {
+  db: Knex;
+  /** Folder of the exported web app; omitted in API-only tests. */
+  webDir?: string;
+  exposeStack?: boolean;
+}
+
+export function createApp(options: AppOptions): Express {
+  const app = express();
+  app.disable('x-powered-by');
+  app.set('query parser', 'simple');
+  app.use(express.json({ limit: '2mb' }));
+
+  app.use('/api/health', createHealthRouter(options.db));
+  app.use('/api/drivers', createDriversRouter(options.db));
+  app.use('/api', apiNotFound);
+
+  if (options.webDir && existsSync(options.webDir)) {
+    const webDir = options.webDir;
+    app.use(express.static(webDir, { index: false, maxAge: '1h' }));
+    // The web export is a single-page app: every other path gets its shell and routes on the client.
+    app.get('/{*splat}', (_req, res) => {
+      res.set('Cache-Control', 'no-cache').sendFile(join(webDir, 'index.html'));
+    });
+  }
+
+  app.use(errorHandler({ exposeStack: options.exposeStack ?? false }));
+  return app;
+}

@@ -1,0 +1,4 @@
+declare module '*.ttf' {
+  const src: number | string;
+  export = src;
+}
