@@ -8,8 +8,8 @@ async function main(): Promise<void> {
     const [, applied] = await db.migrate.latest();
     if (applied.length > 0) console.log(`[conestack] migrations applied: ${applied.join(', ')}`);
     if (process.argv.includes('--demo')) {
-      const { drivers } = await seedDemo(db);
-      console.log(`[conestack] demo catalogue loaded (${drivers} drivers)`);
+      const { drivers, added } = await seedDemo(db, { reset: process.argv.includes('--reset-demo') });
+      console.log(`[conestack] demo catalogue: ${drivers} drivers (${added} added)`);
     }
   } finally {
     await db.destroy();

@@ -1,7 +1,9 @@
+import compression from 'compression';
 import express, { type Express } from 'express';
 import { existsSync } from 'node:fs';
 import { join } from 'node:path';
 import type { Knex } from 'knex';
+import { createCalcRouter } from './calc/router';
 import { createDriversRouter } from './drivers/router';
 import { createHealthRouter } from './health/router';
 import { apiNotFound, errorHandler } from './http/error-handler';
@@ -11,16 +13,21 @@ export interface AppOptions {
   /** Folder of the exported web app; omitted in API-only tests. */
   webDir?: string;
   exposeStack?: boolean;
+  /** Search index staleness window, ms; tests use 0 so fixture writes show at once. */
+  searchStaleAfterMs?: number;
 }
 
 export function createApp(options: AppOptions): Express {
   const app = express();
   app.disable('x-powered-by');
   app.set('query parser', 'simple');
+  // Curves are long arrays of similar numbers; gzip shrinks them several times over.
+  app.use(compression());
   app.use(express.json({ limit: '2mb' }));
 
   app.use('/api/health', createHealthRouter(options.db));
-  app.use('/api/drivers', createDriversRouter(options.db));
+  app.use('/api/drivers', createDriversRouter(options.db, { staleAfterMs: options.searchStaleAfterMs }));
+  app.use('/api/calc', createCalcRouter());
   app.use('/api', apiNotFound);
 
   if (options.webDir && existsSync(options.webDir)) {

@@ -1,5 +1,7 @@
 import type { Knex } from 'knex';
-import type { CurveKind, DriverType } from '../../shared/schemas/drivers';
+import type { RoleBands } from '../../shared/catalogue/role-index';
+import type { BurnInState, CurveKind, DriverType } from '../../shared/schemas/drivers';
+import type { IndexedDriver } from './search-index';
 
 export interface DriverRow {
   id: number;
@@ -10,12 +12,22 @@ export interface DriverRow {
   nominalImpedanceOhm: number;
   makerSlug: string;
   makerName: string;
+  canonicalId: number | null;
+  diaphragm: string | null;
+  surround: string | null;
+  voiceCoilDiameterM: number | null;
+  magnet: string | null;
+  price: number | null;
+  currency: string | null;
+  availability: string | null;
 }
 
 export interface SetRow {
   id: number;
   driverId: number;
   label: string;
+  reviewer: string;
+  burnIn: BurnInState;
   driveVoltageV: number;
   distanceM: number;
   baffle: string;
@@ -23,6 +35,7 @@ export interface SetRow {
   temperatureC: number | null;
   measuredOn: string | null;
   sampleId: string | null;
+  anglesDeg: number[];
 }
 
 export interface ParameterRow {
@@ -30,6 +43,7 @@ export interface ParameterRow {
   name: string;
   value: number;
   unit: string;
+  signal: 'small' | 'large';
 }
 
 export interface CurveRow {
@@ -43,52 +57,114 @@ export interface CurveRow {
 }
 
 const driverColumns = [
-  'd.id', 'd.slug', 'd.model', 'd.type',
+  'd.id', 'd.slug', 'd.model', 'd.type', 'd.canonical_id as canonicalId',
   'd.nominal_size_in as nominalSizeIn', 'd.nominal_impedance_ohm as nominalImpedanceOhm',
+  'd.diaphragm_material as diaphragm', 'd.surround_material as surround', 'd.voice_coil_diameter_m as voiceCoilDiameterM',
+  'd.magnet_type as magnet', 'd.price', 'd.currency', 'd.availability',
   'm.slug as makerSlug', 'm.name as makerName',
 ];
 
-function parseJson(value: unknown): number[] {
-  return typeof value === 'string' ? (JSON.parse(value) as number[]) : (value as number[]);
+function parseJson<T>(value: unknown): T {
+  return (typeof value === 'string' ? JSON.parse(value) : value) as T;
+}
+
+function toDriver(r: Record<string, unknown> | undefined): DriverRow | undefined {
+  if (!r) return undefined;
+  // DECIMAL arrives as a string from mysql2.
+  return { ...(r as unknown as DriverRow), price: r.price == null ? null : Number(r.price) };
 }
 
 export function createDriversRepository(db: Knex) {
   return {
-    async listDrivers(filter: { type?: DriverType }): Promise<DriverRow[]> {
-      const q = db('drivers as d').join('makers as m', 'm.id', 'd.maker_id').whereNull('d.canonical_id').select(driverColumns);
-      if (filter.type) q.where('d.type', filter.type);
-      return q.orderBy([{ column: 'm.name' }, { column: 'd.model' }]);
+    /** Every canonical driver with its searchable figures, for the in-memory index. */
+    async loadIndexRows(): Promise<IndexedDriver[]> {
+      const rows = await db('drivers as d')
+        .join('makers as m', 'm.id', 'd.maker_id')
+        .leftJoin('driver_figures as f', 'f.driver_id', 'd.id')
+        .whereNull('d.canonical_id')
+        .orderBy('d.id')
+        .select(
+          'd.id', 'd.slug', 'd.model', 'd.type', 'd.nominal_size_in as nominalSizeIn', 'd.nominal_impedance_ohm as nominalImpedanceOhm',
+          'd.price', 'd.currency', 'm.slug as makerSlug', 'm.name as makerName',
+          'f.fs_hz as fsHz', 'f.qts', 'f.vas_m3 as vasM3', 'f.xmax_m as xmaxM', 'f.sensitivity_db as sensitivityDb', 'f.bands',
+        );
+      const aliases = await db('driver_aliases').select('driver_id as driverId', 'alias');
+      const byDriver = new Map<number, string[]>();
+      for (const a of aliases as { driverId: number; alias: string }[]) {
+        const list = byDriver.get(a.driverId) ?? [];
+        list.push(a.alias);
+        byDriver.set(a.driverId, list);
+      }
+      return rows.map((r: Record<string, unknown>) => ({
+        id: r.id as number,
+        slug: r.slug as string,
+        model: r.model as string,
+        makerSlug: r.makerSlug as string,
+        makerName: r.makerName as string,
+        type: r.type as DriverType,
+        nominalSizeIn: r.nominalSizeIn as number,
+        nominalImpedanceOhm: r.nominalImpedanceOhm as number,
+        fsHz: (r.fsHz as number | null) ?? null,
+        qts: (r.qts as number | null) ?? null,
+        vasL: r.vasM3 == null ? null : Number(((r.vasM3 as number) * 1000).toFixed(3)),
+        xmaxMm: r.xmaxM == null ? null : Number(((r.xmaxM as number) * 1000).toFixed(3)),
+        sensitivityDb: (r.sensitivityDb as number | null) ?? null,
+        price: r.price == null ? null : Number(r.price),
+        currency: (r.currency as string | null) ?? null,
+        aliases: byDriver.get(r.id as number) ?? [],
+        bands: r.bands == null ? null : parseJson<RoleBands>(r.bands),
+      }));
+    },
+
+    /** Cheap fingerprint of the catalogue; it changes whenever drivers or their figures do. */
+    async catalogueVersion(): Promise<string> {
+      const [[row]] = (await db.raw(
+        'select (select count(*) from drivers) as n, (select max(updated_at) from drivers) as d, (select max(updated_at) from driver_figures) as u, (select count(*) from driver_aliases) as a',
+      )) as [[{ n: number; d: string | null; u: string | null; a: number }]];
+      return `${row.n}:${row.d}:${row.u}:${row.a}`;
     },
 
     async findDriverBySlug(slug: string): Promise<DriverRow | undefined> {
-      return db('drivers as d').join('makers as m', 'm.id', 'd.maker_id').where('d.slug', slug).first(driverColumns);
+      return toDriver(await db('drivers as d').join('makers as m', 'm.id', 'd.maker_id').where('d.slug', slug).first(driverColumns));
     },
 
-    /** Headline parameters per driver from its first approved set, for list cards. */
-    async headlineParameters(driverIds: number[], names: string[]): Promise<(ParameterRow & { driverId: number })[]> {
-      if (driverIds.length === 0) return [];
-      return db('parameters as p')
-        .join('measurement_sets as s', 's.id', 'p.set_id')
-        .whereIn('s.driver_id', driverIds)
-        .where('s.status', 'approved')
-        .whereIn('p.name', names)
-        .orderBy('s.id')
-        .select('s.driver_id as driverId', 'p.set_id as setId', 'p.name', 'p.value', 'p.unit');
+    async findDriverById(id: number): Promise<DriverRow | undefined> {
+      return toDriver(await db('drivers as d').join('makers as m', 'm.id', 'd.maker_id').where('d.id', id).first(driverColumns));
+    },
+
+    async findDriverIdByAliasSlug(slug: string): Promise<number | undefined> {
+      const row = await db('driver_aliases').where({ slug }).first('driver_id');
+      return row?.driver_id;
+    },
+
+    async aliasesFor(driverId: number): Promise<string[]> {
+      return (await db('driver_aliases').where({ driver_id: driverId }).orderBy('id').select('alias')).map((r: { alias: string }) => r.alias);
+    },
+
+    async mountingFor(driverId: number) {
+      return db('driver_mounting')
+        .where({ driver_id: driverId })
+        .first('cutout_diameter_m as cutoutM', 'outer_diameter_m as outerM', 'mounting_depth_m as depthM', 'bolt_circle_m as boltCircleM', 'hole_count as holes');
+    },
+
+    async makerSpecsFor(driverId: number): Promise<{ name: string; value: number; unit: string }[]> {
+      return db('maker_specs').where({ driver_id: driverId }).orderBy('id').select('name', 'value', 'unit');
     },
 
     async setsForDriver(driverId: number): Promise<SetRow[]> {
-      return db('measurement_sets')
+      const rows = await db('measurement_sets')
         .where({ driver_id: driverId, status: 'approved' })
         .orderBy('id')
         .select(
-          'id', 'driver_id as driverId', 'label', 'drive_voltage_v as driveVoltageV', 'distance_m as distanceM', 'baffle', 'gating',
-          'temperature_c as temperatureC', 'measured_on as measuredOn', 'sample_id as sampleId',
+          'id', 'driver_id as driverId', 'label', 'reviewer', 'burn_in as burnIn', 'drive_voltage_v as driveVoltageV', 'distance_m as distanceM',
+          'baffle', 'gating', 'temperature_c as temperatureC', 'measured_on as measuredOn', 'sample_id as sampleId', 'angles_deg',
         );
+      return rows.map(({ angles_deg, ...r }: Record<string, unknown>) => ({ ...(r as unknown as SetRow), anglesDeg: angles_deg == null ? [] : parseJson<number[]>(angles_deg) }));
     },
 
     async parametersForSets(setIds: number[]): Promise<ParameterRow[]> {
       if (setIds.length === 0) return [];
-      return db('parameters').whereIn('set_id', setIds).orderBy('id').select('set_id as setId', 'name', 'value', 'unit');
+      return db('parameters').whereIn('set_id', setIds).orderBy('id').select('set_id as setId', 'name', 'value', 'unit', 'signal');
     },
 
     async curvesForSets(setIds: number[]): Promise<CurveRow[]> {
@@ -102,9 +178,9 @@ export function createDriversRepository(db: Knex) {
         kind: r.kind as CurveKind,
         angleDeg: r.angleDeg as number | null,
         driveLevelV: r.driveLevelV as number | null,
-        x: parseJson(r.x_values),
-        y: parseJson(r.y_values),
-        phase: r.phase_values == null ? null : parseJson(r.phase_values),
+        x: parseJson<number[]>(r.x_values),
+        y: parseJson<number[]>(r.y_values),
+        phase: r.phase_values == null ? null : parseJson<number[]>(r.phase_values),
       }));
     },
   };

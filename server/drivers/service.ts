@@ -1,71 +1,158 @@
-import Fuse from 'fuse.js';
-import type { DriverDetail, DriverListQuery, DriverListResponse, DriverSummary } from '../../shared/schemas/drivers';
+import { computeDerivedFigures } from '../../shared/catalogue/derived-figures';
+import type { DriverDetail, DriverListQuery, DriverListResponse } from '../../shared/schemas/drivers';
+import { availabilitySchema, referenceBandFor } from '../../shared/schemas/drivers';
 import { notFound } from '../http/api-error';
-import type { DriverRow, DriversRepository } from './repository';
+import type { DriversRepository } from './repository';
+import { SearchIndex } from './search-index';
 
-function summarise(row: DriverRow, params: Map<string, number>): DriverSummary {
-  return {
-    slug: row.slug,
-    model: row.model,
-    maker: { slug: row.makerSlug, name: row.makerName },
-    type: row.type,
-    nominalSizeIn: row.nominalSizeIn,
-    nominalImpedanceOhm: row.nominalImpedanceOhm,
-    fsHz: params.get('fs') ?? null,
-    qts: params.get('qts') ?? null,
-    sensitivityDb: params.get('spl283v') ?? null,
-  };
+export interface DriversServiceOptions {
+  /** How long a built index is trusted before the catalogue version is checked again, ms. */
+  staleAfterMs?: number;
 }
 
-export function createDriversService(repo: DriversRepository) {
-  async function headline(rows: DriverRow[]): Promise<Map<number, Map<string, number>>> {
-    const params = await repo.headlineParameters(rows.map((r) => r.id), ['fs', 'qts', 'spl283v']);
-    const byDriver = new Map<number, Map<string, number>>();
-    for (const p of params) {
-      const m = byDriver.get(p.driverId) ?? new Map<string, number>();
-      // First approved set wins, so a later sample does not change the card.
-      if (!m.has(p.name)) m.set(p.name, p.value);
-      byDriver.set(p.driverId, m);
+const toMm = (m: number | null) => (m === null ? null : Math.round(m * 10000) / 10);
+
+/** Follows merge pointers to the surviving entry; bounded in case of a cycle in bad data. */
+const MAX_MERGE_HOPS = 8;
+
+export function createDriversService(repo: DriversRepository, options: DriversServiceOptions = {}) {
+  const staleAfterMs = options.staleAfterMs ?? 2000;
+  let index: SearchIndex | null = null;
+  let version = '';
+  let checkedAt = 0;
+  let building: Promise<SearchIndex> | null = null;
+
+  async function currentIndex(): Promise<SearchIndex> {
+    const now = Date.now();
+    if (index && now - checkedAt < staleAfterMs) return index;
+    const v = await repo.catalogueVersion();
+    checkedAt = Date.now();
+    if (index && v === version) return index;
+    if (!building) {
+      building = repo
+        .loadIndexRows()
+        .then((rows) => {
+          index = new SearchIndex(rows);
+          version = v;
+          return index;
+        })
+        .finally(() => {
+          building = null;
+        });
     }
-    return byDriver;
+    return building;
+  }
+
+  async function resolve(slug: string) {
+    let row = await repo.findDriverBySlug(slug);
+    if (!row) {
+      const id = await repo.findDriverIdByAliasSlug(slug);
+      if (id !== undefined) row = await repo.findDriverById(id);
+    }
+    for (let hops = 0; row && row.canonicalId !== null && hops < MAX_MERGE_HOPS; hops++) {
+      row = await repo.findDriverById(row.canonicalId);
+    }
+    return row;
   }
 
   return {
     async list(query: DriverListQuery): Promise<DriverListResponse> {
-      let rows = await repo.listDrivers({ type: query.type });
-      if (query.q) {
-        const fuse = new Fuse(rows, { keys: ['makerName', 'model', 'slug'], threshold: 0.4, ignoreLocation: true });
-        rows = fuse.search(query.q).map((r) => r.item);
-      }
-      const total = rows.length;
-      const page = rows.slice(query.offset, query.offset + query.limit);
-      const params = await headline(page);
-      return { items: page.map((r) => summarise(r, params.get(r.id) ?? new Map())), total };
+      return (await currentIndex()).search(query);
     },
 
-    async get(slug: string): Promise<DriverDetail> {
-      const row = await repo.findDriverBySlug(slug);
+    /** Drops the cached index; the next search rebuilds it. Call after any catalogue write. */
+    invalidate(): void {
+      index = null;
+      checkedAt = 0;
+    },
+
+    async get(slug: string, band?: { lo: number; hi: number }): Promise<DriverDetail> {
+      const row = await resolve(slug);
       if (!row) throw notFound(`Driver "${slug}"`);
       const sets = await repo.setsForDriver(row.id);
       const setIds = sets.map((s) => s.id);
-      const [params, curves] = await Promise.all([repo.parametersForSets(setIds), repo.curvesForSets(setIds)]);
-      const head = await headline([row]);
+      const [params, curves, aliases, mounting, makerSpecs] = await Promise.all([
+        repo.parametersForSets(setIds),
+        repo.curvesForSets(setIds),
+        repo.aliasesFor(row.id),
+        repo.mountingFor(row.id),
+        repo.makerSpecsFor(row.id),
+      ]);
+      const measurementSets = sets.map((s) => ({
+        id: s.id,
+        label: s.label,
+        reviewer: s.reviewer,
+        sampleId: s.sampleId,
+        burnIn: s.burnIn,
+        driveVoltageV: s.driveVoltageV,
+        distanceM: s.distanceM,
+        baffle: s.baffle,
+        gating: s.gating,
+        temperatureC: s.temperatureC,
+        measuredOn: s.measuredOn,
+        anglesDeg: s.anglesDeg,
+        parameters: params.filter((p) => p.setId === s.id).map(({ name, value, unit, signal }) => ({ name, value, unit, signal })),
+        curves: curves.filter((c) => c.setId === s.id).map(({ setId: _setId, ...c }) => c),
+      }));
+      const figureBand = band ?? referenceBandFor(row.type);
+      const figures = measurementSets.map((s) => computeDerivedFigures(s, row, figureBand));
+      const first = measurementSets[0]?.parameters ?? [];
+      const p = (n: string) => first.find((x) => x.name === n)?.value ?? null;
+      const spread = spreadOf(measurementSets.map((s) => s.parameters));
+      const availability = availabilitySchema.safeParse(row.availability);
       return {
-        ...summarise(row, head.get(row.id) ?? new Map()),
-        measurementSets: sets.map((s) => ({
-          id: s.id,
-          label: s.label,
-          driveVoltageV: s.driveVoltageV,
-          distanceM: s.distanceM,
-          baffle: s.baffle,
-          gating: s.gating,
-          temperatureC: s.temperatureC,
-          measuredOn: s.measuredOn,
-          sampleId: s.sampleId,
-          parameters: params.filter((p) => p.setId === s.id).map(({ name, value, unit }) => ({ name, value, unit })),
-          curves: curves.filter((c) => c.setId === s.id).map(({ setId: _setId, ...c }) => c),
-        })),
+        slug: row.slug,
+        requestedSlug: slug,
+        model: row.model,
+        maker: { slug: row.makerSlug, name: row.makerName },
+        type: row.type,
+        nominalSizeIn: row.nominalSizeIn,
+        nominalImpedanceOhm: row.nominalImpedanceOhm,
+        fsHz: p('fs'),
+        qts: p('qts'),
+        vasL: p('vas') === null ? null : (p('vas') as number) * 1000,
+        xmaxMm: p('xmax') === null ? null : (p('xmax') as number) * 1000,
+        sensitivityDb: figures[0]?.band.lo === referenceBandFor(row.type).lo && figures[0]?.band.hi === referenceBandFor(row.type).hi ? figures[0].sensitivityDb : null,
+        price: row.price,
+        currency: row.currency,
+        aliases,
+        diaphragm: row.diaphragm,
+        surround: row.surround,
+        voiceCoilDiameterMm: row.voiceCoilDiameterM === null ? null : row.voiceCoilDiameterM * 1000,
+        magnet: row.magnet,
+        availability: availability.success ? availability.data : null,
+        mounting: mounting
+          ? {
+              cutoutDiameterMm: toMm(mounting.cutoutM),
+              outerDiameterMm: toMm(mounting.outerM),
+              mountingDepthMm: toMm(mounting.depthM),
+              boltCircleMm: toMm(mounting.boltCircleM),
+              holeCount: mounting.holes,
+            }
+          : null,
+        makerSpecs,
+        measurementSets,
+        figures,
+        spread,
       };
     },
   };
+}
+export type DriversService = ReturnType<typeof createDriversService>;
+
+/** Sample-to-sample spread of each parameter measured in more than one set. */
+export function spreadOf(sets: { name: string; value: number }[][]) {
+  if (sets.length < 2) return [];
+  const byName = new Map<string, number[]>();
+  for (const s of sets) for (const p of s) byName.set(p.name, [...(byName.get(p.name) ?? []), p.value]);
+  const out: { name: string; min: number; max: number; spreadPercent: number; sets: number }[] = [];
+  for (const [name, values] of byName) {
+    if (values.length < 2) continue;
+    const min = Math.min(...values);
+    const max = Math.max(...values);
+    const mid = (min + max) / 2;
+    // Half the range relative to its centre: the ± a builder reads as unit-to-unit tolerance.
+    out.push({ name, min, max, spreadPercent: mid === 0 ? 0 : (100 * (max - min)) / 2 / Math.abs(mid), sets: values.length });
+  }
+  return out;
 }
