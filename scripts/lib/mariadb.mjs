@@ -1,7 +1,7 @@
 // A private MariaDB for this checkout: data in .data/, bound to 127.0.0.1 on its own port.
 // Always pass --defaults-file so nothing is read from /etc/mysql and the system instance is never touched.
 import { spawn, spawnSync } from 'node:child_process';
-import { existsSync, mkdirSync, openSync, writeFileSync } from 'node:fs';
+import { existsSync, mkdirSync, openSync, readFileSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { ensureDebianPackages, isRoot, log, root } from './run.mjs';
 
@@ -96,7 +96,12 @@ export async function startMariadb(options) {
       if (child.exitCode !== null) break;
       await sleep(100);
     }
-    if (!up) throw new Error(`MariaDB did not start on 127.0.0.1:${cfg.port}; see ${join(cfg.dir, 'error.log')}`);
+    if (!up) {
+      const logFile = join(cfg.dir, 'error.log');
+      const lastError = existsSync(logFile) ? readFileSync(logFile, 'utf8').split('\n').filter((l) => l.includes('[ERROR]')).slice(-2).join('\n') : '';
+      const hint = /Address already in use/.test(lastError) ? `\nPort ${cfg.port} is taken by another program; choose another with DB_PORT (npm start) or TEST_DB_PORT (npm test).` : '';
+      throw new Error(`MariaDB did not start on 127.0.0.1:${cfg.port}; see ${logFile}\n${lastError}${hint}`);
+    }
     log(`MariaDB up on 127.0.0.1:${cfg.port}`);
   } else {
     log(`MariaDB already running on 127.0.0.1:${cfg.port}`);
