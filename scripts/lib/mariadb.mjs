@@ -106,13 +106,15 @@ export async function startMariadb(options) {
   } else {
     log(`MariaDB already running on 127.0.0.1:${cfg.port}`);
   }
+  const databases = [cfg.database, ...(options.extraDatabases ?? [])];
   sql(
     cfg,
     [
-      `CREATE DATABASE IF NOT EXISTS \`${cfg.database}\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci;`,
       `CREATE USER IF NOT EXISTS '${cfg.user}'@'127.0.0.1' IDENTIFIED BY '${cfg.password}';`,
-      `GRANT ALL PRIVILEGES ON \`${cfg.database}\`.* TO '${cfg.user}'@'127.0.0.1';`,
-      `GRANT ALL PRIVILEGES ON \`${cfg.database}_scratch\`.* TO '${cfg.user}'@'127.0.0.1';`,
+      ...databases.flatMap((name) => [
+        `CREATE DATABASE IF NOT EXISTS \`${name}\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci;`,
+        `GRANT ALL PRIVILEGES ON \`${name}\`.* TO '${cfg.user}'@'127.0.0.1';`,
+      ]),
       'FLUSH PRIVILEGES;',
     ].join(' '),
   );

@@ -1,4 +1,4 @@
-import { bandMean, buildRoleBands, beamingFromBands, ROLE_BANDS, scoreRole, thdAtDrive } from './role-index';
+import { bandMean, buildRoleBands, beamingFromBands, ROLE_BANDS, RoleMatrix, scoreRole, thdAtDrive } from './role-index';
 
 // A flat synthetic curve on a 1/24-octave grid makes every expected value easy to state by hand.
 const grid = Array.from({ length: 24 * 10 + 1 }, (_, i) => 20 * 2 ** (i / 24));
@@ -88,5 +88,27 @@ describe('beaming and scoring', () => {
 
   it('sinks a driver with no response in the band', () => {
     expect(scoreRole(buildRoleBands({ onAxis: null }), { bandLo: 300, bandHi: 3000, level: 90 }).score).toBe(-Infinity);
+  });
+});
+
+describe('RoleMatrix', () => {
+  it('scores exactly as scoreRole does, for varied drivers and roles', () => {
+    // Deterministic variety: level steps, off-axis drops from different bands, two or three THD levels.
+    const drivers = Array.from({ length: 40 }, (_, k) => {
+      const y = grid.map((f) => 80 + (k % 7) + (f > 1000 * (1 + (k % 5)) ? -(k % 4) : 0) + Math.sin(f / 300 + k));
+      const off = grid.map((f, i) => y[i] - (f > 500 * (1 + (k % 6)) ? 7 + (k % 3) : 1));
+      const thd = [2.83, 5.66, 11.31].slice(0, 2 + (k % 2)).map((levelV, l) => ({ levelV, curve: { x: grid, y: grid.map((f) => (0.1 + 0.05 * k) * (l + 1) * (1 + 100 / f)) } }));
+      return k % 13 === 12 ? null : buildRoleBands({ onAxis: { x: grid, y }, offAxis: { angleDeg: 60, curve: { x: grid, y: off } }, thd });
+    });
+    const matrix = new RoleMatrix(drivers);
+    const idx = drivers.map((_, i) => i);
+    for (const req of [{ bandLo: 300, bandHi: 3000, level: 90 }, { bandLo: 80, bandHi: 800, level: 100 }, { bandLo: 2000, bandHi: 16000, level: 84 }]) {
+      const fast = matrix.scores(idx, req);
+      drivers.forEach((b, i) => {
+        const slow = b ? scoreRole(b, req).score : -Infinity;
+        if (slow === -Infinity) expect(fast[i]).toBe(-Infinity);
+        else expect(fast[i]).toBeCloseTo(slow, 1);
+      });
+    }
   });
 });
