@@ -1,11 +1,6 @@
-import { baseUrl, canvasInkPixels, openBrowser, screenshotPath, type BrowserSession } from './support/browser';
+import { baseUrl, canvasInkPixels, openBrowser, screenshotPath, type BrowserSession, viewports } from './support/browser';
 
 jest.setTimeout(120_000);
-
-const viewports = [
-  { name: 'phone', width: 390, height: 844 },
-  { name: 'wide', width: 1440, height: 900 },
-];
 
 describe.each(viewports)('catalogue at $name size ($width x $height)', ({ name, width, height }) => {
   let s: BrowserSession;

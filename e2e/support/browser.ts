@@ -77,3 +77,15 @@ export async function canvasInkPixels(target: Locator): Promise<number> {
   })()`;
   return page.evaluate<number>(script);
 }
+
+/** The two sizes every flow runs at: a phone and a wide desktop window. */
+export const viewports = [
+  { name: 'phone', width: 390, height: 844 },
+  { name: 'wide', width: 1440, height: 900 },
+];
+
+export async function api<T>(path: string): Promise<T> {
+  const res = await fetch(`${baseUrl()}${path}`);
+  if (!res.ok) throw new Error(`${path}: ${res.status}`);
+  return (await res.json()) as T;
+}

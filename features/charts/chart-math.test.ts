@@ -1,4 +1,4 @@
-import { computeGeometry, formatHz, logFrequencyTicks, nearestIndex, niceYDomain } from './chart-math';
+import { computeGeometry, formatHz, logFrequencyTicks, logYDomain, nearestIndex, niceStep, niceYDomain } from './chart-math';
 
 describe('computeGeometry', () => {
   const series = [{ id: 'a', x: [20, Math.sqrt(20 * 20000), 20000], y: [70, 80, 90], color: '#000' }];
@@ -65,5 +65,39 @@ describe('nearestIndex', () => {
     expect(nearestIndex(xs, 1)).toBe(0);
     expect(nearestIndex(xs, 1e6)).toBe(3);
     expect(nearestIndex([], 5)).toBe(-1);
+  });
+});
+
+describe('axis variants', () => {
+  it('maps a linear x axis proportionally, for excursion in mm', () => {
+    // -5 mm .. +5 mm over 100 px: 0 mm sits at the centre (definition of a linear scale).
+    const g = computeGeometry([{ id: 'a', x: [-5, 0, 5], y: [1, 1, 1], color: '#000' }], {
+      width: 100, height: 100, xDomain: [-5, 5], yDomain: [0, 2], xScale: 'linear', padding: { top: 0, right: 0, bottom: 0, left: 0 },
+    });
+    expect(g.x(0)).toBeCloseTo(50, 6);
+    expect(g.paths[0].d).toBe('M0,50L50,50L100,50');
+    expect(g.xTicks.map((t) => t.value)).toEqual([-4, -2, 0, 2, 4]);
+  });
+
+  it('maps a log y axis by decades and drops values a log axis cannot hold', () => {
+    const g = computeGeometry([{ id: 'a', x: [100, 1000, 10000], y: [0.1, 0, 10], color: '#000' }], {
+      width: 100, height: 200, xDomain: [100, 10000], yScale: 'log', padding: { top: 0, right: 0, bottom: 0, left: 0 },
+    });
+    // Domain snaps to whole decades, 0.1 % .. 10 %: 1 % sits halfway up.
+    expect(g.y.domain()).toEqual([0.1, 10]);
+    expect(g.y(1)).toBeCloseTo(100, 6);
+    expect(g.paths[0].d.match(/[ML]/g)).toHaveLength(2);
+    expect(g.yTicks.filter((t) => t.major).map((t) => t.label)).toEqual(['0.1', '1', '10']);
+  });
+
+  it('picks 1-2-5 steps for linear ticks', () => {
+    expect(niceStep(10, 5)).toBe(2);
+    expect(niceStep(1, 4)).toBeCloseTo(0.5, 9);
+    expect(niceStep(70, 6)).toBe(20);
+  });
+
+  it('gives a log y domain with a floor when there is no positive value', () => {
+    expect(logYDomain([{ id: 'a', x: [1], y: [0], color: '' }])).toEqual([0.01, 10]);
+    expect(logYDomain([{ id: 'a', x: [1, 2], y: [0.05, 100.0001], color: '' }])).toEqual([0.01, 100]);
   });
 });

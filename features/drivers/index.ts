@@ -1,4 +1,5 @@
 export { DriverListScreen } from './screens/driver-list-screen';
-export { DriverScreen } from './screens/driver-screen';
+export { DriverScreen, type DriverScreenProps } from './screens/driver-screen';
 export { useDriver } from './hooks/use-driver';
 export { useDrivers } from './hooks/use-drivers';
+export { driverHref } from './logic/driver-notes';

@@ -2,8 +2,9 @@ import { WithSkiaWeb } from '@shopify/react-native-skia/lib/module/web';
 import { useState } from 'react';
 import { StyleSheet, Text, View, type LayoutChangeEvent } from 'react-native';
 import { ClientOnly, colors, fonts } from '../../ui';
-import type { ChartSeries } from '../chart-math';
+import type { AxisScale, ChartSeries } from '../chart-math';
 import { useChartGeometry } from '../hooks/use-chart-geometry';
+import { ChartLegend } from './chart-legend';
 
 export interface LogChartProps {
   testID?: string;
@@ -14,6 +15,15 @@ export interface LogChartProps {
   yStep?: number;
   yUnit: string;
   height?: number;
+  /** What the x axis measures; frequency by default. */
+  xLabel?: string;
+  xScale?: AxisScale;
+  yScale?: AxisScale;
+  xStep?: number;
+  /** Show a legend of the labelled series under the title. */
+  legend?: boolean;
+  /** Shown instead of the plot when there is nothing to draw. */
+  emptyText?: string;
 }
 
 const DEFAULT_X: readonly [number, number] = [20, 20000];
@@ -21,17 +31,27 @@ const DEFAULT_X: readonly [number, number] = [20, 20000];
 const skiaOptions = { locateFile: (file: string) => `/${file}` };
 const loadCanvas = () => import('./log-chart-canvas').then((m) => ({ default: m.LogChartCanvas }));
 
-/** A log-frequency chart that sizes itself to its container and draws with Skia once mounted. */
-export function LogChart({ testID, title, series, xDomain = DEFAULT_X, yDomain, yStep, yUnit, height = 260 }: LogChartProps) {
+/**
+ * A chart that sizes itself to its container and draws with Skia once mounted. Log-frequency by
+ * default; `xScale="linear"` serves excursion curves and `yScale="log"` distortion in percent.
+ */
+export function LogChart({
+  testID, title, series, xDomain = DEFAULT_X, yDomain, yStep, yUnit, height = 260, xLabel = 'frequency (Hz)', xScale, yScale, xStep, legend, emptyText,
+}: LogChartProps) {
   const [width, setWidth] = useState(0);
-  const geometry = useChartGeometry(series, { width, height, xDomain, yDomain, yStep });
+  const geometry = useChartGeometry(series, { width, height, xDomain, yDomain, yStep, xScale, yScale, xStep });
+  const empty = series.every((s) => s.x.length === 0);
   const onLayout = (e: LayoutChangeEvent) => setWidth(Math.floor(e.nativeEvent.layout.width));
   return (
     <View style={styles.wrap} testID={testID}>
       <View style={styles.head}>
         <Text style={styles.title}>{title}</Text>
-        <Text style={styles.units}>{yUnit} against frequency (Hz)</Text>
+        <Text style={styles.units}>
+          {yUnit} against {xLabel}
+        </Text>
       </View>
+      {legend ? <ChartLegend series={series} testID={testID ? `${testID}-legend` : undefined} /> : null}
+      {empty && emptyText ? <Text style={styles.units}>{emptyText}</Text> : null}
       <View style={{ height }} onLayout={onLayout}>
         {width > 0 ? (
           <ClientOnly>

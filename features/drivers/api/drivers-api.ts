@@ -1,14 +1,16 @@
-import type { DriverListQuery } from '../../../shared/schemas/drivers';
+import { listApiPath, PAGE_SIZE, type ListParams } from '../logic/list-query';
 
-export function driversListPath(query: Partial<DriverListQuery> = {}): string {
-  const params = new URLSearchParams();
-  for (const [k, v] of Object.entries(query)) {
-    if (v !== undefined && v !== '') params.set(k, String(v));
-  }
-  const qs = params.toString();
-  return `/api/drivers${qs ? `?${qs}` : ''}`;
+export function driversListPath(params: ListParams = {}, limit = PAGE_SIZE): string {
+  return listApiPath(params, limit);
 }
 
-export function driverPath(slug: string): string {
-  return `/api/drivers/${encodeURIComponent(slug)}`;
+/** The detail path; a complete band makes the server derive the figures over it. */
+export function driverPath(slug: string, band?: { bandLo?: string; bandHi?: string }): string {
+  const qs = new URLSearchParams();
+  if (band?.bandLo && band?.bandHi) {
+    qs.set('bandLo', band.bandLo);
+    qs.set('bandHi', band.bandHi);
+  }
+  const s = qs.toString();
+  return `/api/drivers/${encodeURIComponent(slug)}${s ? `?${s}` : ''}`;
 }

@@ -1,7 +1,9 @@
 import useSWR from 'swr';
-import type { DriverListQuery, DriverListResponse } from '../../../shared/schemas/drivers';
+import type { DriverListResponse } from '../../../shared/schemas/drivers';
 import { driversListPath } from '../api/drivers-api';
+import type { ListParams } from '../logic/list-query';
 
-export function useDrivers(query: Partial<DriverListQuery> = {}) {
-  return useSWR<DriverListResponse>(driversListPath(query), { keepPreviousData: true });
+/** One page of the catalogue for a search; the previous page stays on screen while the next loads. */
+export function useDrivers(params: ListParams = {}) {
+  return useSWR<DriverListResponse>(driversListPath(params), { keepPreviousData: true });
 }

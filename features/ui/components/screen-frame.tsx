@@ -12,6 +12,7 @@ export function ScreenFrame({ testID, children }: { testID: string; children: Re
           <Text style={styles.brandMark}>◖</Text>
           <Text style={styles.brandText}> Conestack</Text>
         </Link>
+        <Link href="/tools" style={styles.navLink} accessibilityRole="link" testID="nav-tools">Tools</Link>
         <Text style={styles.tagline}>measured drive units, side by side</Text>
       </View>
       <ScrollView contentContainerStyle={styles.content}>{children}</ScrollView>
@@ -28,6 +29,7 @@ const styles = StyleSheet.create({
   brand: { flexDirection: 'row', alignItems: 'baseline' },
   brandMark: { color: '#5eead4', fontSize: 20, fontFamily: fonts.bold },
   brandText: { color: colors.paper, fontSize: 20, fontFamily: fonts.bold, letterSpacing: 0.3 },
+  navLink: { color: '#5eead4', fontSize: 15, fontFamily: fonts.semibold },
   tagline: { color: '#b9c4cc', fontSize: 13, fontFamily: fonts.regular },
   content: { padding: space.lg, gap: space.lg, width: '100%', maxWidth: 1280, alignSelf: 'center' },
 });

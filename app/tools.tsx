@@ -1,0 +1,5 @@
+import { ToolsScreen } from '../features/tools';
+
+export default function Tools() {
+  return <ToolsScreen />;
+}
