@@ -6,6 +6,7 @@ import type { Knex } from 'knex';
 import { createCalcRouter } from './calc/router';
 import { createDriversRouter } from './drivers/router';
 import { createHealthRouter } from './health/router';
+import { createOverlayRouter } from './overlay/router';
 import { apiNotFound, errorHandler } from './http/error-handler';
 
 export interface AppOptions {
@@ -13,6 +14,8 @@ export interface AppOptions {
   /** Folder of the exported web app; omitted in API-only tests. */
   webDir?: string;
   exposeStack?: boolean;
+  /** Anonymous saving of comparison links, on until sign-in lands (ALLOW_ANONYMOUS_SAVE=0 turns it off). */
+  allowAnonymousSave?: boolean;
   /** Search index staleness window, ms; tests use 0 so fixture writes show at once. */
   searchStaleAfterMs?: number;
 }
@@ -28,6 +31,7 @@ export function createApp(options: AppOptions): Express {
   app.use('/api/health', createHealthRouter(options.db));
   app.use('/api/drivers', createDriversRouter(options.db, { staleAfterMs: options.searchStaleAfterMs }));
   app.use('/api/calc', createCalcRouter());
+  app.use('/api', createOverlayRouter(options.db, { allowAnonymousSave: options.allowAnonymousSave ?? process.env.ALLOW_ANONYMOUS_SAVE !== '0' }));
   app.use('/api', apiNotFound);
 
   if (options.webDir && existsSync(options.webDir)) {

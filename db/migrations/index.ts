@@ -12,6 +12,7 @@ import * as m10 from './20261201000010_add_parameter_signal';
 import * as m11 from './20261201000011_create_driver_aliases';
 import * as m12 from './20261201000012_create_driver_figures';
 import * as m13 from './20261201000013_add_driver_updated_at';
+import * as m14 from './20261201000014_create_saved_overlays';
 
 type Migration = { up: (k: Knex) => Promise<void>; down: (k: Knex) => Promise<void> };
 
@@ -30,6 +31,7 @@ const migrations: Record<string, Migration> = {
   '20261201000011_create_driver_aliases': m11,
   '20261201000012_create_driver_figures': m12,
   '20261201000013_add_driver_updated_at': m13,
+  '20261201000014_create_saved_overlays': m14,
 };
 
 export const migrationSource: Knex.MigrationSource<string> = {

@@ -1,0 +1,29 @@
+import { Router } from 'express';
+import type { Knex } from 'knex';
+import { z } from 'zod';
+import { overlayQuerySchema, saveOverlaySchema } from '../../shared/schemas/overlay';
+import { createDriversRepository } from '../drivers/repository';
+import { parseOr400 } from '../http/api-error';
+import { createOverlayRepository } from './repository';
+import { createOverlayService, type OverlayServiceOptions } from './service';
+
+const codeParams = z.object({ code: z.string().regex(/^[a-z0-9]{4,16}$/, 'must be a saved comparison code') });
+
+/** Mounted at /api: GET /overlay builds a comparison, /overlays saves and reads links. */
+export function createOverlayRouter(db: Knex, options: OverlayServiceOptions = {}): Router {
+  const service = createOverlayService(createDriversRepository(db), createOverlayRepository(db), options);
+  const router = Router();
+  router.get('/overlay', async (req, res) => {
+    res.json(await service.overlay(parseOr400(overlayQuerySchema, req.query, 'query')));
+  });
+  router.post('/overlays', async (req, res) => {
+    const input = parseOr400(saveOverlaySchema, req.body ?? {}, 'body');
+    const user = (req as { user?: { id: number } }).user;
+    res.status(201).json(await service.save(input, user?.id ?? null));
+  });
+  router.get('/overlays/:code', async (req, res) => {
+    const { code } = parseOr400(codeParams, req.params, 'params');
+    res.json(await service.getSaved(code));
+  });
+  return router;
+}

@@ -1,0 +1,131 @@
+import { randomBytes } from 'node:crypto';
+import { interpolateLog, logFrequencyGrid } from '../../shared/acoustics/curves';
+import { errorCodes } from '../../shared/api/errors';
+import { computeDerivedFigures } from '../../shared/catalogue/derived-figures';
+import type { Curve } from '../../shared/schemas/drivers';
+import { referenceBandFor } from '../../shared/schemas/drivers';
+import type { OverlayDriver, OverlayQuery, OverlayResponse, SavedOverlay } from '../../shared/schemas/overlay';
+import { overlayOptionsSchema, type saveOverlaySchema } from '../../shared/schemas/overlay';
+import type { z } from 'zod';
+import type { DriversRepository, DriverRow } from '../drivers/repository';
+import { ApiError, notFound } from '../http/api-error';
+import type { OverlayRepository } from './repository';
+
+/** The display grid: the storage grid's 1/48-octave points from 20 Hz to 20 kHz. */
+export const OVERLAY_GRID = logFrequencyGrid(48, 20, 20000).map((f) => Number(f.toPrecision(6)));
+
+const MAX_MERGE_HOPS = 8;
+const CODE_ALPHABET = 'abcdefghijkmnpqrstuvwxyz23456789';
+
+function onGrid(c: Curve, values: readonly number[] = c.y, digits = 2): (number | null)[] {
+  const scale = 10 ** digits;
+  return OVERLAY_GRID.map((f) => {
+    const v = interpolateLog(c.x, values, f);
+    return v === null ? null : Math.round(v * scale) / scale;
+  });
+}
+
+export interface OverlayServiceOptions {
+  /** Until sign-in is enforced, anyone may save links; set false to require a signed-in member. */
+  allowAnonymousSave?: boolean;
+}
+
+export function createOverlayService(drivers: DriversRepository, repo: OverlayRepository, options: OverlayServiceOptions = {}) {
+  async function resolve(slug: string): Promise<DriverRow | undefined> {
+    let row = await drivers.findDriverBySlug(slug);
+    if (!row) {
+      const id = await drivers.findDriverIdByAliasSlug(slug);
+      if (id !== undefined) row = await drivers.findDriverById(id);
+    }
+    for (let hops = 0; row && row.canonicalId !== null && hops < MAX_MERGE_HOPS; hops++) row = await drivers.findDriverById(row.canonicalId);
+    return row;
+  }
+
+  async function canonicalById(id: number): Promise<DriverRow | undefined> {
+    let row = await drivers.findDriverById(id);
+    for (let hops = 0; row && row.canonicalId !== null && hops < MAX_MERGE_HOPS; hops++) row = await drivers.findDriverById(row.canonicalId);
+    return row;
+  }
+
+  async function one(slug: string, setId: number | null, band: { lo: number; hi: number } | null, place: number): Promise<OverlayDriver> {
+    const row = await resolve(slug);
+    if (!row) throw new ApiError(404, errorCodes.notFound, `Driver "${slug}" was not found`, { fields: [{ field: `drivers.${place}`, message: 'no such driver' }] });
+    const sets = await drivers.setsForDriver(row.id);
+    if (sets.length === 0) throw new ApiError(404, errorCodes.notFound, `Driver "${slug}" has no approved measurements yet`);
+    const set = setId === null ? sets[0] : sets.find((s) => s.id === setId);
+    if (!set) throw new ApiError(400, errorCodes.validation, `Set ${setId} is not an approved set of "${slug}"`, { fields: [{ field: `sets.${place}`, message: 'not a set of this driver' }] });
+    const [params, curves] = await Promise.all([drivers.parametersForSets([set.id]), drivers.curvesForSets([set.id])]);
+    const parameters = params.map(({ name, value, unit, signal }) => ({ name, value, unit, signal }));
+    const cs: Curve[] = curves.map(({ setId: _s, ...c }) => c);
+    const figures = computeDerivedFigures({ id: set.id, parameters, curves: cs }, row, band ?? referenceBandFor(row.type));
+    const imp = cs.find((c) => c.kind === 'impedance');
+    const levels = [...new Set(cs.filter((c) => c.kind === 'thd').map((c) => c.driveLevelV ?? 0))].sort((a, b) => a - b);
+    const ref = (s: (typeof sets)[number]) => ({ id: s.id, label: s.label, reviewer: s.reviewer, sampleId: s.sampleId, burnIn: s.burnIn });
+    return {
+      slug: row.slug,
+      requestedSlug: slug,
+      model: row.model,
+      maker: { slug: row.makerSlug, name: row.makerName },
+      type: row.type,
+      nominalSizeIn: row.nominalSizeIn,
+      nominalImpedanceOhm: row.nominalImpedanceOhm,
+      sets: sets.map(ref),
+      set: { ...ref(set), driveVoltageV: set.driveVoltageV, distanceM: set.distanceM, baffle: set.baffle, gating: set.gating, temperatureC: set.temperatureC, measuredOn: set.measuredOn },
+      spl: cs.filter((c) => c.kind === 'spl').sort((a, b) => (a.angleDeg ?? 0) - (b.angleDeg ?? 0)).map((c) => ({ angleDeg: c.angleDeg ?? 0, y: onGrid(c) })),
+      impedance: imp ? { magnitude: onGrid(imp), phaseDeg: imp.phase ? onGrid(imp, imp.phase, 1) : null } : null,
+      thd: levels.map((level) => {
+        const pick = (kind: Curve['kind']) => cs.find((c) => c.kind === kind && (c.driveLevelV ?? 0) === level);
+        const thd = pick('thd')!;
+        const h2 = pick('h2');
+        const h3 = pick('h3');
+        return { driveLevelV: level, thd: onGrid(thd, thd.y, 4), h2: h2 ? onGrid(h2, h2.y, 4) : null, h3: h3 ? onGrid(h3, h3.y, 4) : null };
+      }),
+      parameters,
+      figures,
+    };
+  }
+
+  return {
+    async overlay(q: OverlayQuery): Promise<OverlayResponse> {
+      const band = q.bandLo !== undefined && q.bandHi !== undefined && q.bandHi > q.bandLo ? { lo: q.bandLo, hi: q.bandHi } : null;
+      const list = await Promise.all(q.drivers.map((slug, i) => one(slug, q.sets[i] ?? null, band, i)));
+      return { grid: OVERLAY_GRID, band, drivers: list };
+    },
+
+    async save(input: z.infer<typeof saveOverlaySchema>, userId: number | null): Promise<{ code: string; url: string }> {
+      if (userId === null && options.allowAnonymousSave === false) {
+        throw new ApiError(401, errorCodes.unauthenticated, 'Sign in to save a comparison link');
+      }
+      const entries: { driverId: number; setId: number | null }[] = [];
+      for (const [i, e] of input.entries.entries()) {
+        const row = await resolve(e.slug);
+        if (!row) throw new ApiError(400, errorCodes.validation, `Driver "${e.slug}" was not found`, { fields: [{ field: `entries.${i}.slug`, message: 'no such driver' }] });
+        if (e.setId !== null && !(await repo.setBelongsTo(e.setId, row.id))) {
+          throw new ApiError(400, errorCodes.validation, `Set ${e.setId} is not an approved set of "${e.slug}"`, { fields: [{ field: `entries.${i}.setId`, message: 'not a set of this driver' }] });
+        }
+        entries.push({ driverId: row.id, setId: e.setId });
+      }
+      let code = '';
+      for (let attempt = 0; attempt < 5; attempt++) {
+        const bytes = randomBytes(8);
+        code = Array.from(bytes, (b) => CODE_ALPHABET[b % CODE_ALPHABET.length]).join('');
+        if (!(await repo.codeExists(code))) break;
+      }
+      await repo.insertSaved({ code, title: input.title, note: input.note, entries, options: input.options, createdBy: userId });
+      return { code, url: `/o/${code}` };
+    },
+
+    async getSaved(code: string): Promise<SavedOverlay> {
+      const row = await repo.findSaved(code);
+      if (!row) throw notFound(`Saved comparison "${code}"`);
+      const entries = [];
+      for (const e of row.entries) {
+        // A set follows its driver through a merge; use wherever the set now lives.
+        const driverId = e.setId !== null ? ((await repo.driverOfSet(e.setId)) ?? e.driverId) : e.driverId;
+        const current = await canonicalById(driverId);
+        if (current) entries.push({ slug: current.slug, setId: e.setId });
+      }
+      return { code: row.code, title: row.title, note: row.note, entries, options: overlayOptionsSchema.parse(row.options), createdAt: row.createdAt };
+    },
+  };
+}

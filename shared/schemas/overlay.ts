@@ -1,0 +1,116 @@
+import { z } from 'zod';
+import { burnInSchema, derivedFiguresSchema, driverTypeSchema, makerSchema, parameterSchema } from './drivers';
+
+export const MAX_STACK = 4;
+
+const slug = z.string().regex(/^[a-z0-9-]{1,160}$/, 'must be a driver slug');
+
+/** `drivers=a,b` and `sets=12,,15` (an empty place means the driver's first set). */
+export const overlayQuerySchema = z
+  .object({
+    drivers: z
+      .string()
+      .transform((s) => s.split(',').map((x) => x.trim()).filter(Boolean))
+      .pipe(z.array(slug).min(1, 'name at least one driver').max(MAX_STACK, `at most ${MAX_STACK} drivers`)),
+    sets: z
+      .string()
+      .optional()
+      .transform((s, ctx) => {
+        if (!s) return [];
+        return s.split(',').map((x) => {
+          if (x.trim() === '') return null;
+          const n = Number(x);
+          if (!Number.isInteger(n) || n <= 0) {
+            ctx.addIssue({ code: 'custom', message: `"${x}" is not a measurement set id` });
+            return null;
+          }
+          return n;
+        });
+      }),
+    bandLo: z.coerce.number().finite().min(10).max(40000).optional(),
+    bandHi: z.coerce.number().finite().min(10).max(40000).optional(),
+  })
+  .strict();
+export type OverlayQuery = z.infer<typeof overlayQuerySchema>;
+
+export const overlaySetRefSchema = z.object({
+  id: z.number().int(),
+  label: z.string(),
+  reviewer: z.string(),
+  sampleId: z.string().nullable(),
+  burnIn: burnInSchema,
+});
+
+/** Curves are sent on the response's shared grid: one y array per curve, no x arrays. */
+export const overlayDriverSchema = z.object({
+  slug: z.string(),
+  requestedSlug: z.string(),
+  model: z.string(),
+  maker: makerSchema,
+  type: driverTypeSchema,
+  nominalSizeIn: z.number(),
+  nominalImpedanceOhm: z.number(),
+  sets: z.array(overlaySetRefSchema),
+  set: overlaySetRefSchema.extend({
+    driveVoltageV: z.number(),
+    distanceM: z.number(),
+    baffle: z.string(),
+    gating: z.string().nullable(),
+    temperatureC: z.number().nullable(),
+    measuredOn: z.string().nullable(),
+  }),
+  spl: z.array(z.object({ angleDeg: z.number(), y: z.array(z.number().nullable()) })),
+  impedance: z.object({ magnitude: z.array(z.number().nullable()), phaseDeg: z.array(z.number().nullable()).nullable() }).nullable(),
+  thd: z.array(z.object({ driveLevelV: z.number(), thd: z.array(z.number().nullable()), h2: z.array(z.number().nullable()).nullable(), h3: z.array(z.number().nullable()).nullable() })),
+  parameters: z.array(parameterSchema),
+  figures: derivedFiguresSchema,
+});
+export type OverlayDriver = z.infer<typeof overlayDriverSchema>;
+
+export const overlayResponseSchema = z.object({
+  grid: z.array(z.number()),
+  band: z.object({ lo: z.number(), hi: z.number() }).nullable(),
+  drivers: z.array(overlayDriverSchema),
+});
+export type OverlayResponse = z.infer<typeof overlayResponseSchema>;
+
+/** Display choices a saved link keeps; the client owns their meaning. */
+export const overlayOptionsSchema = z
+  .object({
+    level: z.enum(['raw', 'frequency', 'band']).default('raw'),
+    alignHz: z.number().min(10).max(40000).optional(),
+    smoothing: z.enum(['none', '1/12', '1/6', '1/3']).default('none'),
+    bandLo: z.number().min(10).max(40000).optional(),
+    bandHi: z.number().min(10).max(40000).optional(),
+    highlight: z.boolean().default(false),
+    offAxis: z.boolean().default(false),
+    thdLevelV: z.number().positive().optional(),
+    thdUnit: z.enum(['percent', 'db']).default('percent'),
+    harmonics: z.boolean().default(false),
+  })
+  .strict();
+export type OverlayOptions = z.infer<typeof overlayOptionsSchema>;
+
+export const saveOverlaySchema = z
+  .object({
+    title: z.string().trim().min(1, 'give the comparison a title').max(120),
+    note: z.string().trim().max(2000).default(''),
+    entries: z
+      .array(z.object({ slug, setId: z.number().int().positive().nullable().default(null) }).strict())
+      .min(1, 'add at least one driver')
+      .max(MAX_STACK, `at most ${MAX_STACK} drivers`),
+    options: overlayOptionsSchema.default({ level: 'raw', smoothing: 'none', highlight: false, offAxis: false, thdUnit: 'percent', harmonics: false }),
+  })
+  .strict();
+export type SaveOverlayInput = z.input<typeof saveOverlaySchema>;
+
+export const savedOverlaySchema = z.object({
+  code: z.string(),
+  title: z.string(),
+  note: z.string(),
+  /** Current slugs: renamed or merged drivers resolve to their surviving entry. */
+  entries: z.array(z.object({ slug: z.string(), setId: z.number().int().nullable() })),
+  options: overlayOptionsSchema,
+  createdAt: z.string(),
+});
+export type SavedOverlay = z.infer<typeof savedOverlaySchema>;
