@@ -31,7 +31,7 @@ export function createApp(options: AppOptions): Express {
   app.use('/api/health', createHealthRouter(options.db));
   app.use('/api/drivers', createDriversRouter(options.db, { staleAfterMs: options.searchStaleAfterMs }));
   app.use('/api/calc', createCalcRouter());
-  app.use('/api', createOverlayRouter(options.db, { allowAnonymousSave: options.allowAnonymousSave ?? process.env.ALLOW_ANONYMOUS_SAVE !== '0' }));
+  app.use('/api', createOverlayRouter(options.db, { allowAnonymousSave: options.allowAnonymousSave ?? process.env.ALLOW_ANONYMOUS_SAVE !== '0', staleAfterMs: options.searchStaleAfterMs }));
   app.use('/api', apiNotFound);
 
   if (options.webDir && existsSync(options.webDir)) {

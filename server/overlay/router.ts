@@ -14,7 +14,7 @@ export function createOverlayRouter(db: Knex, options: OverlayServiceOptions = {
   const service = createOverlayService(createDriversRepository(db), createOverlayRepository(db), options);
   const router = Router();
   router.get('/overlay', async (req, res) => {
-    res.json(await service.overlay(parseOr400(overlayQuerySchema, req.query, 'query')));
+    res.type('application/json').send(await service.overlayJson(parseOr400(overlayQuerySchema, req.query, 'query')));
   });
   router.post('/overlays', async (req, res) => {
     const input = parseOr400(saveOverlaySchema, req.body ?? {}, 'body');

@@ -17,15 +17,22 @@ export const OVERLAY_GRID = logFrequencyGrid(48, 20, 20000).map((f) => Number(f.
 const MAX_MERGE_HOPS = 8;
 const CODE_ALPHABET = 'abcdefghijkmnpqrstuvwxyz23456789';
 
-function onGrid(c: Curve, values: readonly number[] = c.y, digits = 2): (number | null)[] {
-  const scale = 10 ** digits;
+/**
+ * A curve on the display grid, rounded for the wire: levels to 0.1 dB or ohm and phase to 1°
+ * (finer than any chart shows), distortion to three significant figures.
+ */
+function onGrid(c: Curve, values: readonly number[] = c.y, digits: number | 'sig3' = 1): (number | null)[] {
+  const scale = typeof digits === 'number' ? 10 ** digits : 1;
   return OVERLAY_GRID.map((f) => {
     const v = interpolateLog(c.x, values, f);
-    return v === null ? null : Math.round(v * scale) / scale;
+    if (v === null) return null;
+    return digits === 'sig3' ? Number(v.toPrecision(3)) : Math.round(v * scale) / scale;
   });
 }
 
 export interface OverlayServiceOptions {
+  /** How long a cached comparison is served before the catalogue version is checked again, ms. */
+  staleAfterMs?: number;
   /** Until sign-in is enforced, anyone may save links; set false to require a signed-in member. */
   allowAnonymousSave?: boolean;
 }
@@ -72,20 +79,54 @@ export function createOverlayService(drivers: DriversRepository, repo: OverlayRe
       sets: sets.map(ref),
       set: { ...ref(set), driveVoltageV: set.driveVoltageV, distanceM: set.distanceM, baffle: set.baffle, gating: set.gating, temperatureC: set.temperatureC, measuredOn: set.measuredOn },
       spl: cs.filter((c) => c.kind === 'spl').sort((a, b) => (a.angleDeg ?? 0) - (b.angleDeg ?? 0)).map((c) => ({ angleDeg: c.angleDeg ?? 0, y: onGrid(c) })),
-      impedance: imp ? { magnitude: onGrid(imp), phaseDeg: imp.phase ? onGrid(imp, imp.phase, 1) : null } : null,
+      impedance: imp ? { magnitude: onGrid(imp), phaseDeg: imp.phase ? onGrid(imp, imp.phase, 0) : null } : null,
       thd: levels.map((level) => {
         const pick = (kind: Curve['kind']) => cs.find((c) => c.kind === kind && (c.driveLevelV ?? 0) === level);
         const thd = pick('thd')!;
         const h2 = pick('h2');
         const h3 = pick('h3');
-        return { driveLevelV: level, thd: onGrid(thd, thd.y, 4), h2: h2 ? onGrid(h2, h2.y, 4) : null, h3: h3 ? onGrid(h3, h3.y, 4) : null };
+        return { driveLevelV: level, thd: onGrid(thd, thd.y, 'sig3'), h2: h2 ? onGrid(h2, h2.y, 'sig3') : null, h3: h3 ? onGrid(h3, h3.y, 'sig3') : null };
       }),
       parameters,
       figures,
     };
   }
 
+  // Comparisons are read far more often than the catalogue changes (a linked write-up is opened by
+  // every reader), so built responses are kept, serialised, until the catalogue version moves.
+  const cache = new Map<string, string>();
+  const CACHE_MAX = 500;
+  let cacheVersion = '';
+  let checkedAt = 0;
+  const staleAfterMs = options.staleAfterMs ?? 2000;
+
+  async function freshCache(): Promise<void> {
+    if (Date.now() - checkedAt < staleAfterMs) return;
+    const v = await drivers.catalogueVersion();
+    checkedAt = Date.now();
+    if (v !== cacheVersion) {
+      cache.clear();
+      cacheVersion = v;
+    }
+  }
+
   return {
+    /** The comparison as JSON text, from the cache when the catalogue has not changed. */
+    async overlayJson(q: OverlayQuery): Promise<string> {
+      await freshCache();
+      const key = JSON.stringify([q.drivers, q.sets, q.bandLo, q.bandHi]);
+      const hit = cache.get(key);
+      if (hit !== undefined) {
+        cache.delete(key);
+        cache.set(key, hit);
+        return hit;
+      }
+      const body = JSON.stringify(await this.overlay(q));
+      cache.set(key, body);
+      if (cache.size > CACHE_MAX) cache.delete(cache.keys().next().value as string);
+      return body;
+    },
+
     async overlay(q: OverlayQuery): Promise<OverlayResponse> {
       const band = q.bandLo !== undefined && q.bandHi !== undefined && q.bandHi > q.bandLo ? { lo: q.bandLo, hi: q.bandHi } : null;
       const list = await Promise.all(q.drivers.map((slug, i) => one(slug, q.sets[i] ?? null, band, i)));
