@@ -70,7 +70,8 @@ describe.each(viewports)('tools at $name size ($width x $height)', ({ name, widt
     await expect(screen.getByTestId('thiele-small-constants').textContent()).resolves.toMatch(/343\.2 m\/s/);
     await screen.getByTestId('levels-thdPercent').fill('1');
     // THD 1 % = −40 dB: common practice, no source.
-    await s.page.waitForFunction('document.querySelector(\'[data-testid="levels-result-thd-db"]\')?.textContent === "-40.0"');
+    // A locator wait, not a page function: the app's Content-Security-Policy forbids string eval.
+    await screen.getByTestId('levels-result-thd-db').filter({ hasText: /^-40\.0$/ }).waitFor();
   });
 
   it('lays the calculators out for the screen width', async () => {

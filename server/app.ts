@@ -3,19 +3,25 @@ import express, { type Express } from 'express';
 import { existsSync } from 'node:fs';
 import { join } from 'node:path';
 import type { Knex } from 'knex';
+import { createAuth, SESSION_COOKIE, type AuthOptions } from './auth/router';
 import { createCalcRouter } from './calc/router';
 import { createDriversRouter } from './drivers/router';
 import { createHealthRouter } from './health/router';
-import { createOverlayRouter } from './overlay/router';
 import { apiNotFound, errorHandler } from './http/error-handler';
+import { embedSecurityHeaders, limiter, sameOriginOnly, securityHeaders } from './http/security';
+import { createOverlayRouter } from './overlay/router';
 
 export interface AppOptions {
   db: Knex;
   /** Folder of the exported web app; omitted in API-only tests. */
   webDir?: string;
   exposeStack?: boolean;
-  /** Anonymous saving of comparison links, on until sign-in lands (ALLOW_ANONYMOUS_SAVE=0 turns it off). */
+  /** Sign-in settings; defaults suit tests (fake provider, a throwaway secret). */
+  auth?: Partial<AuthOptions>;
+  /** Lets anyone save comparison links without signing in (off: saving needs a member). */
   allowAnonymousSave?: boolean;
+  /** State-changing API requests per minute per client. */
+  writesPerMinute?: number;
   /** Search index staleness window, ms; tests use 0 so fixture writes show at once. */
   searchStaleAfterMs?: number;
 }
@@ -24,14 +30,32 @@ export function createApp(options: AppOptions): Express {
   const app = express();
   app.disable('x-powered-by');
   app.set('query parser', 'simple');
+  const publicUrl = options.auth?.publicUrl ?? 'http://127.0.0.1';
+  if (publicUrl.startsWith('https://')) app.set('trust proxy', 1);
   // Curves are long arrays of similar numbers; gzip shrinks them several times over.
   app.use(compression());
+  app.use(/^\/o\/[^/]+\/embed\/?$/, embedSecurityHeaders);
+  app.use((req, res, next) => (/^\/o\/[^/]+\/embed\/?$/.test(req.path) ? next() : securityHeaders(req, res, next)));
   app.use(express.json({ limit: '2mb' }));
+
+  const auth = createAuth(options.db, {
+    publicUrl,
+    sessionSecret: options.auth?.sessionSecret ?? 'conestack-test-secret',
+    provider: options.auth?.provider,
+    adminLogins: options.auth?.adminLogins,
+    signInPerMinute: options.auth?.signInPerMinute,
+  });
+  app.use(['/api', '/auth'], sameOriginOnly([publicUrl], SESSION_COOKIE));
+  app.use(['/api', '/auth'], ...auth.middleware);
+  const writes = limiter(options.writesPerMinute ?? 120, 'changes');
+  app.use('/api', (req, res, next) => (req.method === 'GET' || req.method === 'HEAD' ? next() : writes(req, res, next)));
+  app.use(auth.authRouter);
+  app.use('/api', auth.apiRouter);
 
   app.use('/api/health', createHealthRouter(options.db));
   app.use('/api/drivers', createDriversRouter(options.db, { staleAfterMs: options.searchStaleAfterMs }));
   app.use('/api/calc', createCalcRouter());
-  app.use('/api', createOverlayRouter(options.db, { allowAnonymousSave: options.allowAnonymousSave ?? process.env.ALLOW_ANONYMOUS_SAVE !== '0', staleAfterMs: options.searchStaleAfterMs }));
+  app.use('/api', createOverlayRouter(options.db, { allowAnonymousSave: options.allowAnonymousSave ?? false, staleAfterMs: options.searchStaleAfterMs }));
   app.use('/api', apiNotFound);
 
   if (options.webDir && existsSync(options.webDir)) {

@@ -13,6 +13,9 @@ import * as m11 from './20261201000011_create_driver_aliases';
 import * as m12 from './20261201000012_create_driver_figures';
 import * as m13 from './20261201000013_add_driver_updated_at';
 import * as m14 from './20261201000014_create_saved_overlays';
+import * as m15 from './20261201000015_create_users';
+import * as m16 from './20261201000016_create_role_audit';
+import * as m17 from './20261201000017_create_sessions';
 
 type Migration = { up: (k: Knex) => Promise<void>; down: (k: Knex) => Promise<void> };
 
@@ -32,6 +35,9 @@ const migrations: Record<string, Migration> = {
   '20261201000012_create_driver_figures': m12,
   '20261201000013_add_driver_updated_at': m13,
   '20261201000014_create_saved_overlays': m14,
+  '20261201000015_create_users': m15,
+  '20261201000016_create_role_audit': m16,
+  '20261201000017_create_sessions': m17,
 };
 
 export const migrationSource: Knex.MigrationSource<string> = {

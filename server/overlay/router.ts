@@ -4,6 +4,7 @@ import { z } from 'zod';
 import { overlayQuerySchema, saveOverlaySchema } from '../../shared/schemas/overlay';
 import { createDriversRepository } from '../drivers/repository';
 import { parseOr400 } from '../http/api-error';
+import { currentUser, requireRole } from '../http/require-role';
 import { createOverlayRepository } from './repository';
 import { createOverlayService, type OverlayServiceOptions } from './service';
 
@@ -16,10 +17,10 @@ export function createOverlayRouter(db: Knex, options: OverlayServiceOptions = {
   router.get('/overlay', async (req, res) => {
     res.type('application/json').send(await service.overlayJson(parseOr400(overlayQuerySchema, req.query, 'query')));
   });
-  router.post('/overlays', async (req, res) => {
+  const mayWrite = options.allowAnonymousSave ? [] : [requireRole('member')];
+  router.post('/overlays', ...mayWrite, async (req, res) => {
     const input = parseOr400(saveOverlaySchema, req.body ?? {}, 'body');
-    const user = (req as { user?: { id: number } }).user;
-    res.status(201).json(await service.save(input, user?.id ?? null));
+    res.status(201).json(await service.save(input, currentUser(req)?.id ?? null));
   });
   router.get('/overlays/:code', async (req, res) => {
     const { code } = parseOr400(codeParams, req.params, 'params');

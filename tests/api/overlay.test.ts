@@ -8,7 +8,8 @@ const P = 'apitest-overlay';
 
 describe('overlay API', () => {
   const db = createTestDb();
-  const app = createApp({ db, searchStaleAfterMs: 0 });
+  // Anonymous saving is switched on here to test the links themselves; who may save is the role matrix's job.
+  const app = createApp({ db, searchStaleAfterMs: 0, allowAnonymousSave: true });
   let made: Awaited<ReturnType<typeof insertFixtureCatalogue>>;
 
   beforeAll(async () => {
