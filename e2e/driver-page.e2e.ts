@@ -1,5 +1,5 @@
 import type { DriverDetail, DriverListResponse } from '../shared/schemas/drivers';
-import { baseUrl, canvasInkPixels, openBrowser, screenshotPath, type BrowserSession, viewports, api } from './support/browser';
+import { baseUrl, openBrowser, screenshotPath, type BrowserSession, viewports, api, chartInk } from './support/browser';
 
 jest.setTimeout(240_000);
 
@@ -43,15 +43,7 @@ async function pick(): Promise<Picks> {
 }
 
 async function inkOf(s: BrowserSession, chart: ReturnType<BrowserSession['page']['getByTestId']>): Promise<number> {
-  const canvas = chart.locator('canvas');
-  await canvas.waitFor({ timeout: 30_000 });
-  // Skia draws asynchronously after CanvasKit loads; poll until the grid and curves appear.
-  let ink = 0;
-  for (let i = 0; i < 40 && ink < 1500; i++) {
-    await s.page.waitForTimeout(250);
-    ink = await canvasInkPixels(canvas);
-  }
-  return ink;
+  return chartInk(s.page, chart);
 }
 
 describe.each(viewports)('driver page at $name size ($width x $height)', ({ name, width, height }) => {

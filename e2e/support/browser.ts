@@ -89,3 +89,28 @@ export async function api<T>(path: string): Promise<T> {
   if (!res.ok) throw new Error(`${path}: ${res.status}`);
   return (await res.json()) as T;
 }
+
+/** Signs in through the local test provider and comes back to `returnTo` (the current page by default). */
+export async function signInWithTestAccount(page: Page, login: string, returnTo?: string): Promise<void> {
+  const back = returnTo ?? `${new URL(page.url()).pathname}${new URL(page.url()).search}`;
+  await page.goto(`${baseUrl()}/auth/github?returnTo=${encodeURIComponent(back)}`);
+  const existing = page.getByTestId(`fake-account-${login}`);
+  if (await existing.count()) await existing.click();
+  else {
+    await page.getByTestId('fake-login').fill(login);
+    await page.getByTestId('fake-create').click();
+  }
+  await page.getByTestId('account-menu').first().waitFor();
+}
+
+/** Waits for a chart's canvas and polls until Skia has drawn (it draws after CanvasKit loads). */
+export async function chartInk(page: Page, chart: Locator, enough = 1500): Promise<number> {
+  const canvas = chart.locator('canvas');
+  await canvas.waitFor({ timeout: 30_000 });
+  let ink = 0;
+  for (let i = 0; i < 40 && ink < enough; i++) {
+    await page.waitForTimeout(250);
+    ink = await canvasInkPixels(canvas);
+  }
+  return ink;
+}

@@ -2,6 +2,8 @@
 // reloads and is shared by every screen that shows it. Pure list rules sit apart from storage.
 export const STACK_KEY = 'conestack.stack';
 export const STACK_MAX = 4;
+/** Fired on window after every write, for the page chrome's count (ui cannot import this feature). */
+export const STACK_EVENT = 'conestack:stack';
 
 const slugPattern = /^[a-z0-9-]{1,160}$/;
 
@@ -62,6 +64,7 @@ export function writeStack(list: readonly string[]): void {
   if (s) s.setItem(STACK_KEY, raw);
   else memory = raw;
   listeners.forEach((l) => l());
+  if (typeof window !== 'undefined' && typeof window.dispatchEvent === 'function') window.dispatchEvent(new Event(STACK_EVENT));
 }
 
 export function subscribeStack(listener: Listener): () => void {

@@ -25,6 +25,11 @@ export function createOverlayRepository(db: Knex) {
       return { ...r, entries: parse(r.entries), options: parse(r.options), createdAt: String(r.createdAt) };
     },
 
+    async listSavedBy(userId: number): Promise<{ code: string; title: string; note: string; createdAt: string }[]> {
+      const rows = await db('saved_overlays').where({ created_by: userId }).orderBy('id', 'desc').limit(200).select('code', 'title', 'note', 'created_at as createdAt');
+      return rows.map((r: { code: string; title: string; note: string; createdAt: unknown }) => ({ ...r, createdAt: String(r.createdAt) }));
+    },
+
     async codeExists(code: string): Promise<boolean> {
       return Boolean(await db('saved_overlays').where({ code }).first('id'));
     },

@@ -22,6 +22,9 @@ export function createOverlayRouter(db: Knex, options: OverlayServiceOptions = {
     const input = parseOr400(saveOverlaySchema, req.body ?? {}, 'body');
     res.status(201).json(await service.save(input, currentUser(req)?.id ?? null));
   });
+  router.get('/me/overlays', requireRole('member'), async (req, res) => {
+    res.json({ overlays: await service.listMine(currentUser(req)!.id) });
+  });
   router.get('/overlays/:code', async (req, res) => {
     const { code } = parseOr400(codeParams, req.params, 'params');
     res.json(await service.getSaved(code));

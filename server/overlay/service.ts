@@ -156,6 +156,8 @@ export function createOverlayService(drivers: DriversRepository, repo: OverlayRe
       return { code, url: `/o/${code}` };
     },
 
+    listMine: (userId: number) => repo.listSavedBy(userId),
+
     async getSaved(code: string): Promise<SavedOverlay> {
       const row = await repo.findSaved(code);
       if (!row) throw notFound(`Saved comparison "${code}"`);

@@ -73,6 +73,13 @@ describe('roles and sessions', () => {
     });
   }
 
+  it("lists a member's own saved links and nobody else's", async () => {
+    const mine = await (await fetch(`${server.url}/api/me/overlays`, { headers: { cookie: cookies.member as string } })).json();
+    expect(mine.overlays.map((o: { title: string }) => o.title)).toContain(`${P} link`);
+    const visitor = await fetch(`${server.url}/api/me/overlays`);
+    expect(visitor.status).toBe(401);
+  });
+
   it('refuses a signed-in change with no Origin or Referer', async () => {
     const res = await fetch(`${server.url}/api/overlays`, { method: 'POST', headers: { 'content-type': 'application/json', cookie: cookies.member as string }, body: JSON.stringify({ title: `${P} x`, entries: [{ slug: driverSlug }] }) });
     expect(res.status).toBe(403);

@@ -1,10 +1,12 @@
 import { WithSkiaWeb } from '@shopify/react-native-skia/lib/module/web';
-import { useState } from 'react';
+import { useState, type ReactNode } from 'react';
 import { StyleSheet, Text, View, type LayoutChangeEvent } from 'react-native';
 import { ClientOnly, colors, fonts } from '../../ui';
+import type { ChartCursor } from '../chart-cursor';
 import type { AxisScale, ChartSeries } from '../chart-math';
 import { useChartGeometry } from '../hooks/use-chart-geometry';
 import { ChartLegend } from './chart-legend';
+import { CursorLayer } from './cursor-layer';
 
 export interface LogChartProps {
   testID?: string;
@@ -24,6 +26,12 @@ export interface LogChartProps {
   legend?: boolean;
   /** Shown instead of the plot when there is nothing to draw. */
   emptyText?: string;
+  /** A cursor shared with other charts: hovering or dragging here moves it, every chart draws it. */
+  cursor?: ChartCursor;
+  /** An x range shaded behind the curves (an intended pass band). */
+  highlight?: readonly [number, number] | null;
+  /** Extra content under the plot (a caution, a note). */
+  footer?: ReactNode;
 }
 
 const DEFAULT_X: readonly [number, number] = [20, 20000];
@@ -36,7 +44,7 @@ const loadCanvas = () => import('./log-chart-canvas').then((m) => ({ default: m.
  * default; `xScale="linear"` serves excursion curves and `yScale="log"` distortion in percent.
  */
 export function LogChart({
-  testID, title, series, xDomain = DEFAULT_X, yDomain, yStep, yUnit, height = 260, xLabel = 'frequency (Hz)', xScale, yScale, xStep, legend, emptyText,
+  testID, title, series, xDomain = DEFAULT_X, yDomain, yStep, yUnit, height = 260, xLabel = 'frequency (Hz)', xScale, yScale, xStep, legend, emptyText, cursor, highlight, footer,
 }: LogChartProps) {
   const [width, setWidth] = useState(0);
   const geometry = useChartGeometry(series, { width, height, xDomain, yDomain, yStep, xScale, yScale, xStep });
@@ -59,11 +67,13 @@ export function LogChart({
               opts={skiaOptions}
               getComponent={loadCanvas}
               fallback={<View style={{ width, height }} />}
-              componentProps={{ geometry, width, height }}
+              componentProps={{ geometry, width, height, highlight: highlight ?? null }}
             />
           </ClientOnly>
         ) : null}
+        {cursor && width > 0 ? <CursorLayer cursor={cursor} geometry={geometry} /> : null}
       </View>
+      {footer}
     </View>
   );
 }

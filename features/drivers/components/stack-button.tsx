@@ -1,3 +1,4 @@
+import { Link } from 'expo-router';
 import { StyleSheet, Text, View } from 'react-native';
 import { useStackSelection } from '../../stack';
 import { ActionButton, colors, fonts, space } from '../../ui';
@@ -17,6 +18,11 @@ export function StackButton({ slug }: { slug: string }) {
         testID="stack-add"
       />
       {inStack ? <ActionButton kind="quiet" label="Remove" onPress={() => stack.remove(slug)} testID="stack-remove" /> : null}
+      {stack.count > 0 ? (
+        <Link href="/stack" style={styles.link} accessibilityRole="link" testID="stack-open">
+          Open the stack
+        </Link>
+      ) : null}
       {!inStack && stack.full ? <Text style={styles.note}>Remove one from the stack to add this driver.</Text> : null}
     </View>
   );
@@ -24,5 +30,6 @@ export function StackButton({ slug }: { slug: string }) {
 
 const styles = StyleSheet.create({
   row: { flexDirection: 'row', alignItems: 'center', gap: space.sm, flexWrap: 'wrap' },
+  link: { fontFamily: fonts.semibold, fontSize: 14, color: colors.accent },
   note: { fontFamily: fonts.regular, fontSize: 12, color: colors.inkSoft },
 });

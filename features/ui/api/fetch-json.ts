@@ -42,3 +42,15 @@ export async function postJson<T>(path: string, body: unknown, options: { signal
   });
   return readJson<T>(res);
 }
+
+/** Any state-changing call; the browser adds the Origin header the server's CSRF check reads. */
+export async function sendJson<T>(method: 'POST' | 'PATCH' | 'DELETE', path: string, body?: unknown): Promise<T | null> {
+  const res = await fetch(`${apiBase()}${path}`, {
+    method,
+    headers: { accept: 'application/json', ...(body === undefined ? {} : { 'content-type': 'application/json' }) },
+    body: body === undefined ? undefined : JSON.stringify(body),
+    credentials: 'same-origin',
+  });
+  if (res.status === 204) return null;
+  return readJson<T>(res);
+}

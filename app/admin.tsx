@@ -1,0 +1,5 @@
+import { AdminScreen } from '../features/account';
+
+export default function AdminRoute() {
+  return <AdminScreen />;
+}

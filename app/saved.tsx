@@ -1,0 +1,5 @@
+import { SavedScreen } from '../features/account';
+
+export default function SavedRoute() {
+  return <SavedScreen />;
+}

@@ -1,0 +1,5 @@
+import { SignInScreen } from '../features/account';
+
+export default function SignInRoute() {
+  return <SignInScreen />;
+}

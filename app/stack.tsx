@@ -1,0 +1,5 @@
+import { StackScreen } from '../features/stack';
+
+export default function StackRoute() {
+  return <StackScreen />;
+}

@@ -1,0 +1,5 @@
+import { SubmitScreen } from '../features/account';
+
+export default function SubmitRoute() {
+  return <SubmitScreen />;
+}
