@@ -51,6 +51,8 @@ const directives = {
   baseUri: ["'self'"],
   formAction: ["'self'"],
   frameAncestors: ["'self'"],
+  // Served over plain http on a LAN, upgrading would break every asset; https deployments set HSTS.
+  upgradeInsecureRequests: null,
 };
 
 export const securityHeaders = helmet({ contentSecurityPolicy: { directives }, crossOriginEmbedderPolicy: false });

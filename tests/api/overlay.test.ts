@@ -45,6 +45,19 @@ describe('overlay API', () => {
     expect(a.figures.sensitivityDb).toBeCloseTo(88, 6);
   });
 
+  it('serves a cached comparison only until the catalogue changes', async () => {
+    const a = made.drivers[0];
+    const first = await request(app).get('/api/overlay').query({ drivers: a.slug });
+    expect(first.body.drivers[0].model).toBe('Overlay A');
+    await db('drivers').where({ id: a.id }).update({ model: 'Overlay A renamed' });
+    try {
+      const second = await request(app).get('/api/overlay').query({ drivers: a.slug });
+      expect(second.body.drivers[0].model).toBe('Overlay A renamed');
+    } finally {
+      await db('drivers').where({ id: a.id }).update({ model: 'Overlay A' });
+    }
+  });
+
   it('follows an old slug and picks the requested set', async () => {
     const c = made.drivers[2];
     const res = await request(app).get('/api/overlay').query({ drivers: `${P}-c-old`, sets: String(c.setId) });
