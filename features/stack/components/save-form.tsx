@@ -1,6 +1,7 @@
 import { useState } from 'react';
 import { Platform, StyleSheet, Text, TextInput, View } from 'react-native';
 import type { OverlayOptions } from '../../../shared/schemas/overlay';
+import { signInHref, useMe } from '../../account';
 import { ActionButton, ApiRequestError, colors, fonts, radius, space } from '../../ui';
 import { saveOverlay } from '../api/overlay-api';
 import type { StackEntry } from '../logic/stack-options';
@@ -13,6 +14,7 @@ export function SaveForm({ entries, options }: { entries: readonly StackEntry[];
   const [error, setError] = useState<string | null>(null);
   const [link, setLink] = useState<string | null>(null);
   const [copied, setCopied] = useState(false);
+  const me = useMe();
 
   const save = async () => {
     setBusy(true);
@@ -41,6 +43,17 @@ export function SaveForm({ entries, options }: { entries: readonly StackEntry[];
     }
   };
 
+  if (!me.isLoading && !me.can('member')) {
+    // Visitors see how to get the action rather than a form that would refuse them.
+    const back = typeof window !== 'undefined' ? `${window.location.pathname}${window.location.search}` : '/stack';
+    return (
+      <View style={styles.box} testID="save-form">
+        <Text style={styles.title}>Save link</Text>
+        <Text style={styles.hint}>Members can save this comparison as a short link for a write-up.</Text>
+        <ActionButton kind="secondary" label="Sign in to save" onPress={() => window.location.assign(signInHref(back))} testID="save-sign-in" />
+      </View>
+    );
+  }
   return (
     <View style={styles.box} testID="save-form">
       <Text style={styles.title}>Save link</Text>
@@ -61,6 +74,7 @@ export function SaveForm({ entries, options }: { entries: readonly StackEntry[];
 const styles = StyleSheet.create({
   box: { backgroundColor: colors.card, borderWidth: 1, borderColor: colors.rule, borderRadius: radius.md, padding: space.md, gap: space.sm },
   title: { fontFamily: fonts.semibold, fontSize: 15, color: colors.ink },
+  hint: { fontFamily: fonts.regular, fontSize: 14, color: colors.inkSoft },
   input: { fontFamily: fonts.regular, fontSize: 14, color: colors.ink, borderWidth: 1, borderColor: colors.rule, borderRadius: radius.sm, paddingHorizontal: space.sm, paddingVertical: 6 },
   note: { minHeight: 56 },
   error: { fontFamily: fonts.semibold, fontSize: 13, color: colors.warn },
