@@ -19,7 +19,7 @@ const maria = await startMariadb({
 const env = { ...process.env, ...dbEnv(maria.cfg), NODE_ENV: 'production', BENCH_SIZES: sizes.join(',') };
 let code = 0;
 try {
-  for (const file of ['tests/bench/search-bench.ts', 'tests/bench/overlay-bench.ts', 'tests/bench/cursor-bench.ts']) {
+  for (const file of ['tests/bench/search-bench.ts', 'tests/bench/overlay-bench.ts', 'tests/bench/parse-bench.ts', 'tests/bench/cursor-bench.ts']) {
     code = runSync('node', ['--import', 'tsx', '--max-old-space-size=4096', file], { env }) || code;
   }
 } finally {

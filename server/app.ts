@@ -10,6 +10,7 @@ import { createHealthRouter } from './health/router';
 import { apiNotFound, errorHandler } from './http/error-handler';
 import { embedSecurityHeaders, limiter, sameOriginOnly, securityHeaders } from './http/security';
 import { createOverlayRouter } from './overlay/router';
+import { createSubmissionsRouter } from './submissions/router';
 
 export interface AppOptions {
   db: Knex;
@@ -56,6 +57,7 @@ export function createApp(options: AppOptions): Express {
   app.use('/api/drivers', createDriversRouter(options.db, { staleAfterMs: options.searchStaleAfterMs }));
   app.use('/api/calc', createCalcRouter());
   app.use('/api', createOverlayRouter(options.db, { allowAnonymousSave: options.allowAnonymousSave ?? false, staleAfterMs: options.searchStaleAfterMs }));
+  app.use('/api', createSubmissionsRouter(options.db));
   app.use('/api', apiNotFound);
 
   if (options.webDir && existsSync(options.webDir)) {

@@ -16,6 +16,8 @@ import * as m14 from './20261201000014_create_saved_overlays';
 import * as m15 from './20261201000015_create_users';
 import * as m16 from './20261201000016_create_role_audit';
 import * as m17 from './20261201000017_create_sessions';
+import * as m18 from './20261201000018_create_upload_files';
+import * as m19 from './20261201000019_add_set_submitter';
 
 type Migration = { up: (k: Knex) => Promise<void>; down: (k: Knex) => Promise<void> };
 
@@ -38,6 +40,8 @@ const migrations: Record<string, Migration> = {
   '20261201000015_create_users': m15,
   '20261201000016_create_role_audit': m16,
   '20261201000017_create_sessions': m17,
+  '20261201000018_create_upload_files': m18,
+  '20261201000019_add_set_submitter': m19,
 };
 
 export const migrationSource: Knex.MigrationSource<string> = {

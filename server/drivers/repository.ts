@@ -80,7 +80,9 @@ export function createDriversRepository(db: Knex) {
     async loadIndexRows(): Promise<IndexedDriver[]> {
       const rows = await db('drivers as d')
         .join('makers as m', 'm.id', 'd.maker_id')
-        .leftJoin('driver_figures as f', 'f.driver_id', 'd.id')
+        // Only drivers with approved measurements (which is when figures exist) are searchable; an
+        // entry created by a pending submission waits for moderation.
+        .join('driver_figures as f', 'f.driver_id', 'd.id')
         .whereNull('d.canonical_id')
         .orderBy('d.id')
         .select(

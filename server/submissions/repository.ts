@@ -1,0 +1,79 @@
+import type { Knex } from 'knex';
+
+export function createSubmissionsRepository(db: Knex) {
+  return {
+    /** Runs `fn` in one transaction: a submission lands whole or not at all. */
+    transaction: <T,>(fn: (trx: Knex.Transaction) => Promise<T>) => db.transaction(fn),
+
+    async stageUpload(row: { token: string; userId: number; fileName: string; kind: string; angleDeg: number | null; driveLevelV: number | null; bytes: Buffer; settings: unknown }): Promise<void> {
+      await db('upload_files').insert({
+        token: row.token, uploaded_by: row.userId, file_name: row.fileName, kind: row.kind, angle_deg: row.angleDeg, drive_level_v: row.driveLevelV,
+        bytes: row.bytes, parse_settings: JSON.stringify(row.settings),
+      });
+    },
+
+    async stagedUploads(trx: Knex.Transaction, tokens: string[], userId: number) {
+      const rows = await trx('upload_files').whereIn('token', tokens).where({ uploaded_by: userId }).whereNull('set_id').forUpdate()
+        .select('id', 'token', 'file_name as fileName', 'kind', 'angle_deg as angleDeg', 'drive_level_v as driveLevelV', 'bytes', 'parse_settings as settings');
+      return rows.map((r: Record<string, unknown>) => ({ ...r, settings: typeof r.settings === 'string' ? JSON.parse(r.settings) : r.settings })) as {
+        id: number; token: string; fileName: string; kind: string; angleDeg: number | null; driveLevelV: number | null; bytes: Buffer; settings: { options?: object };
+      }[];
+    },
+
+    /** Creates (or finds) the driver and the pending set, inside the caller's transaction. */
+    async createPendingSet(
+      trx: Knex.Transaction,
+      s: {
+        driver: { slug: string } | { makerName: string; model: string; type: string; nominalSizeIn: number; nominalImpedanceOhm: number };
+        userId: number;
+        method: Record<string, unknown>;
+        anglesDeg: number[];
+        normalisation: unknown;
+      },
+    ): Promise<{ setId: number; driverSlug: string }> {
+      let driverId: number;
+      let driverSlug: string;
+      if ('slug' in s.driver) {
+        const d = await trx('drivers').where({ slug: s.driver.slug }).first('id', 'slug');
+        if (!d) throw Object.assign(new Error('no driver has this slug'), { field: 'driver.slug' });
+        driverId = d.id;
+        driverSlug = d.slug;
+      } else {
+        const makerSlug = s.driver.makerName.toLowerCase().replace(/[^a-z0-9]+/g, '-').replace(/^-|-$/g, '');
+        await trx('makers').insert({ slug: makerSlug, name: s.driver.makerName }).onConflict('slug').ignore();
+        const maker = await trx('makers').where({ slug: makerSlug }).first('id');
+        driverSlug = `${makerSlug}-${s.driver.model.toLowerCase().replace(/[^a-z0-9]+/g, '-').replace(/^-|-$/g, '')}`;
+        [driverId] = await trx('drivers').insert({
+          slug: driverSlug, maker_id: maker.id, model: s.driver.model, type: s.driver.type, nominal_size_in: s.driver.nominalSizeIn, nominal_impedance_ohm: s.driver.nominalImpedanceOhm,
+        });
+      }
+      const m = s.method;
+      const [setId] = await trx('measurement_sets').insert({
+        driver_id: driverId, label: m.label, reviewer: m.reviewer, status: 'pending', burn_in: m.burnIn, drive_voltage_v: m.driveVoltageV, distance_m: m.distanceM,
+        baffle: m.baffle, gating: m.gating, temperature_c: m.temperatureC, measured_on: m.measuredOn, sample_id: m.sampleId, submitted_by: s.userId,
+        angles_deg: JSON.stringify(s.anglesDeg), normalisation: JSON.stringify(s.normalisation),
+      });
+      return { setId, driverSlug };
+    },
+
+    async insertCurve(trx: Knex.Transaction, setId: number, c: { kind: string; angleDeg: number | null; driveLevelV: number | null; x: number[]; y: number[]; phase: number[] | null }): Promise<void> {
+      await trx('curves').insert({
+        set_id: setId, kind: c.kind, angle_deg: c.angleDeg, drive_level_v: c.driveLevelV, x_values: JSON.stringify(c.x), y_values: JSON.stringify(c.y), phase_values: c.phase ? JSON.stringify(c.phase) : null,
+      });
+    },
+
+    async finishSet(trx: Knex.Transaction, setId: number, parameters: { name: string; value: number; unit: string; signal: string }[], uploadIds: number[]): Promise<void> {
+      if (parameters.length) await trx('parameters').insert(parameters.map((p) => ({ set_id: setId, ...p })));
+      await trx('upload_files').whereIn('id', uploadIds).update({ set_id: setId });
+    },
+
+    async mine(userId: number) {
+      return db('measurement_sets as s')
+        .join('drivers as d', 'd.id', 's.driver_id')
+        .where({ 's.submitted_by': userId })
+        .orderBy('s.id', 'desc')
+        .select('s.id', 's.status', 's.label', 's.created_at as createdAt', 'd.slug as driverSlug', 'd.model');
+    },
+  };
+}
+export type SubmissionsRepository = ReturnType<typeof createSubmissionsRepository>;

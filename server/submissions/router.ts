@@ -1,0 +1,45 @@
+import { Router } from 'express';
+import type { Knex } from 'knex';
+import multer from 'multer';
+import { errorCodes } from '../../shared/api/errors';
+import { submissionSchema, uploadMetaSchema } from '../../shared/schemas/submissions';
+import type { User } from '../../shared/schemas/users';
+import { ApiError, parseOr400 } from '../http/api-error';
+import { currentUser, requireRole } from '../http/require-role';
+import { createSubmissionsRepository } from './repository';
+import { createSubmissionsService } from './service';
+
+const MAX_FILE_BYTES = 5 * 1024 * 1024;
+const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: MAX_FILE_BYTES, files: 40 } });
+
+export function createSubmissionsRouter(db: Knex): Router {
+  const service = createSubmissionsService(createSubmissionsRepository(db));
+  const router = Router();
+  const reviewer = requireRole('reviewer');
+  router.post('/uploads/parse', reviewer, (req, res, next) => {
+    upload.array('files', 40)(req, res, (err: unknown) => {
+      if (!err) return next();
+      const e = err as { code?: string; field?: string; message?: string };
+      if (e.code === 'LIMIT_FILE_SIZE') return next(new ApiError(400, errorCodes.validation, `A file is over the ${MAX_FILE_BYTES / 1024 / 1024} MB limit`, { fields: [{ field: 'files', message: 'file too large' }] }));
+      next(new ApiError(400, errorCodes.badRequest, `Upload could not be read: ${e.message ?? 'unknown error'}`));
+    });
+  }, async (req, res) => {
+    let metaJson: unknown;
+    try {
+      metaJson = JSON.parse(String((req.body as { meta?: string }).meta ?? '[]'));
+    } catch {
+      throw new ApiError(400, errorCodes.validation, 'meta must be JSON', { fields: [{ field: 'meta', message: 'not JSON' }] });
+    }
+    const meta = parseOr400(uploadMetaSchema, metaJson, 'body');
+    const files = ((req.files as Express.Multer.File[] | undefined) ?? []).map((f) => ({ originalname: f.originalname, buffer: f.buffer }));
+    res.json(await service.parse(currentUser(req) as User, files, meta));
+  });
+  router.post('/submissions', reviewer, async (req, res) => {
+    const input = parseOr400(submissionSchema, req.body ?? {}, 'body');
+    res.status(201).json(await service.submit(currentUser(req) as User, input));
+  });
+  router.get('/submissions/mine', reviewer, async (req, res) => {
+    res.json({ submissions: await service.mine(currentUser(req) as User) });
+  });
+  return router;
+}

@@ -1,0 +1,103 @@
+import { randomBytes } from 'node:crypto';
+import { interpolateLog, logFrequencyGrid } from '../../shared/acoustics/curves';
+import { errorCodes } from '../../shared/api/errors';
+import type { UploadMeta } from '../../shared/schemas/submissions';
+import type { submissionSchema } from '../../shared/schemas/submissions';
+import type { User } from '../../shared/schemas/users';
+import { parseMeasurementFile, type ParseResult } from '../../shared/uploads';
+import type { z } from 'zod';
+import { ApiError } from '../http/api-error';
+import type { SubmissionsRepository } from './repository';
+
+const GRID = logFrequencyGrid();
+const ACOUSTIC = new Set(['spl', 'impedance', 'thd', 'h2', 'h3', 'imd']);
+const UNITS: Record<string, string> = { fs: 'Hz', re: 'ohm', le: 'H', bl: 'T·m', mms: 'kg', cms: 'm/N', sd: 'm^2', vas: 'm^3', xmax: 'm' };
+
+export interface UploadedFile {
+  originalname: string;
+  buffer: Buffer;
+}
+
+export function createSubmissionsService(repo: SubmissionsRepository) {
+  return {
+    /** Reads each file, stages the ones that parse (bytes kept) and reports each file on its own. */
+    async parse(user: User, files: UploadedFile[], meta: UploadMeta) {
+      if (files.length !== meta.length) {
+        throw new ApiError(400, errorCodes.validation, `meta describes ${meta.length} files but ${files.length} were sent`, { fields: [{ field: 'meta', message: 'one entry per file' }] });
+      }
+      const out = [];
+      for (const [i, f] of files.entries()) {
+        const m = meta[i];
+        const result: ParseResult = parseMeasurementFile({ name: f.originalname, bytes: new Uint8Array(f.buffer), kind: m.kind, options: m.options });
+        if (!result.ok) {
+          out.push({ fileName: f.originalname, ok: false as const, error: result.error });
+          continue;
+        }
+        const token = randomBytes(16).toString('hex');
+        await repo.stageUpload({ token, userId: user.id, fileName: f.originalname, kind: m.kind, angleDeg: m.angleDeg, driveLevelV: m.driveLevelV, bytes: f.buffer, settings: { options: m.options ?? {}, detected: result.settings } });
+        out.push({ fileName: f.originalname, ok: true as const, token, kind: m.kind, angleDeg: m.angleDeg, driveLevelV: m.driveLevelV, points: result.points, settings: result.settings, warnings: result.warnings });
+      }
+      return { files: out };
+    },
+
+    /**
+     * Re-reads the staged originals, resamples acoustic curves onto the common grid, refers SPL to
+     * 2.83 V / 1 m from the declared drive and distance, and writes everything in one transaction.
+     */
+    async submit(user: User, input: z.infer<typeof submissionSchema>) {
+      try {
+        return await repo.transaction(async (trx) => {
+          const staged = await repo.stagedUploads(trx, input.uploads, user.id);
+          const missing = input.uploads.filter((t) => !staged.some((s) => s.token === t));
+          if (missing.length) {
+            throw new ApiError(400, errorCodes.validation, `${missing.length} upload(s) are unknown, not yours or already submitted`, {
+              fields: missing.map((t) => ({ field: `uploads.${input.uploads.indexOf(t)}`, message: 'unknown upload' })),
+            });
+          }
+          const { driveVoltageV, distanceM } = input.method;
+          // SPL at V volts and d metres to 2.83 V / 1 m: +20·log10(2.83/V) for drive, +20·log10(d/1 m) for inverse distance.
+          const splShift = 20 * Math.log10(2.83 / driveVoltageV) + 20 * Math.log10(distanceM);
+          const normalisation = {
+            grid: '1/48 octave, 10 Hz to 40 kHz (acoustic curves; no extrapolation)',
+            reference: '2.83 V / 1 m',
+            steps: [`SPL shifted ${splShift >= 0 ? '+' : ''}${splShift.toFixed(2)} dB from ${driveVoltageV} V at ${distanceM} m`, 'distortion converted to percent of the fundamental', 'large-signal x in metres'],
+          };
+          const anglesDeg = [...new Set(staged.filter((u) => u.kind === 'spl').map((u) => u.angleDeg ?? 0))];
+          const created = await repo.createPendingSet(trx, { driver: input.driver, userId: user.id, method: { ...input.method, reviewer: user.displayName }, anglesDeg, normalisation });
+          // Each original is read again from its stored bytes, so what lands is exactly what can be re-run.
+          for (const u of staged) {
+            const parsed = parseMeasurementFile({ name: u.fileName, bytes: new Uint8Array(u.bytes), kind: u.kind as never, options: u.settings.options });
+            if (!parsed.ok) throw new ApiError(400, errorCodes.validation, parsed.error.message, { fields: [{ field: `uploads.${input.uploads.indexOf(u.token)}`, message: parsed.error.message }] });
+            const p = parsed.points;
+            if (!ACOUSTIC.has(u.kind)) {
+              await repo.insertCurve(trx, created.setId, { kind: u.kind, angleDeg: null, driveLevelV: null, x: p.x, y: p.y, phase: p.phase });
+              continue;
+            }
+            const x: number[] = [];
+            const y: number[] = [];
+            const ph: number[] = [];
+            for (const f of GRID) {
+              const v = interpolateLog(p.x, p.y, f);
+              if (v === null) continue;
+              x.push(Number(f.toPrecision(6)));
+              y.push(Number((u.kind === 'spl' ? v + splShift : v).toPrecision(6)));
+              if (p.phase) ph.push(Number((interpolateLog(p.x, p.phase, f) as number).toFixed(2)));
+            }
+            await repo.insertCurve(trx, created.setId, { kind: u.kind, angleDeg: u.kind === 'spl' ? (u.angleDeg ?? 0) : u.angleDeg, driveLevelV: u.driveLevelV, x, y, phase: p.phase ? ph : null });
+          }
+          const parameters = input.parameters.map((p) => ({ name: p.name, value: p.value, unit: UNITS[p.name] ?? '', signal: p.signal }));
+          await repo.finishSet(trx, created.setId, parameters, staged.map((s) => s.id));
+          return created;
+        });
+      } catch (err) {
+        if (err instanceof ApiError) throw err;
+        const e = err as { code?: string; field?: string; message?: string };
+        if (e.code === 'ER_DUP_ENTRY') throw new ApiError(409, errorCodes.conflict, 'A driver with that maker and model already exists; pick it instead', { fields: [{ field: 'driver', message: 'already listed' }] });
+        if (e.field) throw new ApiError(400, errorCodes.validation, `${e.field}: ${e.message}`, { fields: [{ field: e.field, message: e.message ?? 'invalid' }] });
+        throw err;
+      }
+    },
+
+    mine: (user: User) => repo.mine(user.id),
+  };
+}

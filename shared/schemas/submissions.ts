@@ -1,0 +1,61 @@
+import { z } from 'zod';
+import { burnInSchema, curveKindSchema, driverTypeSchema } from './drivers';
+
+/** One entry per uploaded file, in the same order as the files, sent as the `meta` form field. */
+export const uploadMetaSchema = z.array(
+  z
+    .object({
+      kind: curveKindSchema.exclude(['impedance_fit']),
+      angleDeg: z.number().min(-180).max(180).nullable().default(null),
+      driveLevelV: z.number().positive().nullable().default(null),
+      options: z
+        .object({
+          columns: z.object({ x: z.number().int().min(0), y: z.number().int().min(0), phase: z.number().int().min(0).optional() }).strict().optional(),
+          xUnit: z.enum(['Hz', 'kHz', 'mm', 'm']).optional(),
+          distortionUnit: z.enum(['percent', 'db']).optional(),
+        })
+        .strict()
+        .optional(),
+    })
+    .strict(),
+);
+export type UploadMeta = z.infer<typeof uploadMetaSchema>;
+
+export const methodSchema = z
+  .object({
+    driveVoltageV: z.number().positive().max(100),
+    distanceM: z.number().positive().max(20),
+    baffle: z.string().trim().min(1, 'describe the baffle or enclosure').max(200),
+    gating: z.string().trim().max(200).nullable().default(null),
+    temperatureC: z.number().min(-30).max(60).nullable().default(null),
+    measuredOn: z.iso.date().nullable().default(null),
+    sampleId: z.string().trim().max(80).nullable().default(null),
+    burnIn: burnInSchema.default('out-of-box'),
+    label: z.string().trim().max(200).default('Submitted set'),
+  })
+  .strict();
+
+export const submissionSchema = z
+  .object({
+    driver: z.union([
+      z.object({ slug: z.string().regex(/^[a-z0-9-]{1,160}$/) }).strict(),
+      z
+        .object({
+          makerName: z.string().trim().min(2).max(200),
+          model: z.string().trim().min(1).max(200),
+          type: driverTypeSchema,
+          nominalSizeIn: z.number().positive().max(30),
+          nominalImpedanceOhm: z.number().positive().max(100),
+        })
+        .strict(),
+    ]),
+    method: methodSchema,
+    uploads: z.array(z.string().regex(/^[a-f0-9]{32}$/, 'not an upload token')).min(1, 'upload at least one curve').max(60),
+    parameters: z
+      .array(z.object({ name: z.string().regex(/^[a-z0-9_]{1,40}$/), value: z.number().finite(), signal: z.enum(['small', 'large']).default('small') }).strict())
+      .max(60)
+      .default([])
+      .refine((ps) => new Set(ps.map((p) => p.name)).size === ps.length, 'each parameter may appear once'),
+  })
+  .strict();
+export type SubmissionInput = z.input<typeof submissionSchema>;

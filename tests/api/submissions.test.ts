@@ -1,0 +1,116 @@
+import { readFileSync } from 'node:fs';
+import { join } from 'node:path';
+import { parseMeasurementFile } from '../../shared/uploads';
+import { createTestDb } from '../support/test-db';
+import { signIn, startTestServer } from '../support/sign-in';
+
+const P = 'apitest-subm';
+const fixtures = join(__dirname, '..', 'fixtures', 'uploads');
+
+describe('reviewer submissions', () => {
+  const db = createTestDb();
+  let server: Awaited<ReturnType<typeof startTestServer>>;
+  let reviewer = '';
+  let member = '';
+
+  const cleanup = async () => {
+    const makers = await db('makers').where('slug', 'like', `${P}%`).select('id');
+    await db('drivers').whereIn('maker_id', makers.map((m: { id: number }) => m.id)).delete();
+    await db('makers').where('slug', 'like', `${P}%`).delete();
+    await db('users').where('login', 'like', `${P}-%`).delete();
+  };
+
+  beforeAll(async () => {
+    await cleanup();
+    server = await startTestServer(db);
+    reviewer = (await signIn(server.url, `${P}-reviewer`)).cookie;
+    member = (await signIn(server.url, `${P}-member`)).cookie;
+    await db('users').where({ login: `${P}-reviewer` }).update({ role: 'reviewer' });
+  });
+  afterAll(async () => {
+    await server.close();
+    await cleanup();
+    await db.destroy();
+  });
+
+  const upload = (cookie: string, files: { name: string; meta: Record<string, unknown> }[]) => {
+    const form = new FormData();
+    for (const f of files) form.append('files', new Blob([readFileSync(join(fixtures, f.name))]), f.name);
+    form.append('meta', JSON.stringify(files.map((f) => f.meta)));
+    return fetch(`${server.url}/api/uploads/parse`, { method: 'POST', body: form, headers: { cookie, origin: server.url } });
+  };
+  const submit = (body: unknown) =>
+    fetch(`${server.url}/api/submissions`, { method: 'POST', body: JSON.stringify(body), headers: { cookie: reviewer, origin: server.url, 'content-type': 'application/json' } });
+  const counts = async () => {
+    const n = async (t: string) => Number((await db(t).count({ n: '*' }).first())?.n);
+    return { makers: await n('makers'), drivers: await n('drivers'), sets: await n('measurement_sets'), curves: await n('curves'), attached: Number((await db('upload_files').whereNotNull('set_id').count({ n: '*' }).first())?.n) };
+  };
+  const method = { driveVoltageV: 5.66, distanceM: 0.5, baffle: 'test baffle 600 x 400 mm', temperatureC: 21, sampleId: 'S1', burnIn: 'out-of-box' };
+
+  it('only reviewers may upload', async () => {
+    const res = await upload(member, [{ name: 'spl-0deg-tab.txt', meta: { kind: 'spl', angleDeg: 0 } }]);
+    expect(res.status).toBe(403);
+  });
+
+  it('parses each file on its own and names the line of a broken one', async () => {
+    const res = await upload(reviewer, [
+      { name: 'spl-0deg-tab.txt', meta: { kind: 'spl', angleDeg: 0 } },
+      { name: 'broken-line-212.txt', meta: { kind: 'spl', angleDeg: 0 } },
+    ]);
+    expect(res.status).toBe(200);
+    const { files } = await res.json();
+    expect(files[0]).toMatchObject({ ok: true, fileName: 'spl-0deg-tab.txt' });
+    expect(files[0].token).toMatch(/^[a-f0-9]{32}$/);
+    expect(files[1]).toMatchObject({ ok: false, error: { file: 'broken-line-212.txt', line: 212 } });
+  });
+
+  it('lands a submission whole, referred to 2.83 V / 1 m, pending, with the original kept', async () => {
+    const res = await upload(reviewer, [{ name: 'spl-0deg-tab.txt', meta: { kind: 'spl', angleDeg: 0 } }, { name: 'impedance-3col-header.csv', meta: { kind: 'impedance' } }]);
+    const { files } = await res.json();
+    const sub = await submit({ driver: { makerName: `${P} Works`, model: 'Test 80', type: 'mid-range', nominalSizeIn: 3, nominalImpedanceOhm: 4 }, method, uploads: files.map((f: { token: string }) => f.token), parameters: [{ name: 'fs', value: 101 }] });
+    expect(sub.status).toBe(201);
+    const { setId } = await sub.json();
+    const set = await db('measurement_sets').where({ id: setId }).first();
+    expect(set.status).toBe('pending');
+    const spl = await db('curves').where({ set_id: setId, kind: 'spl' }).first();
+    const x: number[] = typeof spl.x_values === 'string' ? JSON.parse(spl.x_values) : spl.x_values;
+    const y: number[] = typeof spl.y_values === 'string' ? JSON.parse(spl.y_values) : spl.y_values;
+    // From 5.66 V at 0.5 m to 2.83 V at 1 m: 20·log10(2.83/5.66) + 20·log10(0.5) = −12.04 dB
+    // (voltage ratio in dB and inverse-distance law; common practice, no source).
+    const original = parseMeasurementFile({ name: 'spl', bytes: readFileSync(join(fixtures, 'spl-0deg-tab.txt')), kind: 'spl' });
+    if (!original.ok) throw new Error('fixture must parse');
+    const i = original.points.x.findIndex((f) => f >= 1000);
+    const at = x.findIndex((f) => Math.abs(f - original.points.x[i]) / f < 1e-3);
+    if (at >= 0) expect(y[at]).toBeCloseTo(original.points.y[i] + 20 * Math.log10(2.83 / 5.66) + 20 * Math.log10(0.5), 2);
+    expect(x.length).toBeGreaterThan(10);
+    const stored = await db('upload_files').where({ set_id: setId }).select('file_name', 'bytes');
+    expect(stored.map((r: { file_name: string }) => r.file_name).sort()).toEqual(['impedance-3col-header.csv', 'spl-0deg-tab.txt']);
+    expect(Buffer.from(stored.find((r: { file_name: string }) => r.file_name === 'spl-0deg-tab.txt').bytes).equals(readFileSync(join(fixtures, 'spl-0deg-tab.txt')))).toBe(true);
+    const mine = await (await fetch(`${server.url}/api/submissions/mine`, { headers: { cookie: reviewer } })).json();
+    expect(mine.submissions[0]).toMatchObject({ id: setId, status: 'pending', model: 'Test 80' });
+    // Pending work is not in the public catalogue until a moderator approves it.
+    const search = await (await fetch(`${server.url}/api/drivers?q=${encodeURIComponent(`${P} Works Test 80`)}`)).json();
+    expect(search.items.map((d: { model: string }) => d.model)).not.toContain('Test 80');
+  });
+
+  it('leaves no rows behind when a submission fails part-way', async () => {
+    const res = await upload(reviewer, [{ name: 'spl-0deg-tab.txt', meta: { kind: 'spl', angleDeg: 0 } }, { name: 'thd-db-relative.txt', meta: { kind: 'thd', driveLevelV: 2.83 } }]);
+    const { files } = await res.json();
+    // Damage the second stored original: it fails when re-read, after the maker, driver, set and
+    // first curve have been written inside the transaction.
+    await db('upload_files').where({ token: files[1].token }).update({ bytes: Buffer.from('frequency,thd\nnot,a number\n') });
+    const before = await counts();
+    const sub = await submit({ driver: { makerName: `${P} Brand New Maker`, model: 'Never 1', type: 'tweeter', nominalSizeIn: 1, nominalImpedanceOhm: 6 }, method, uploads: files.map((f: { token: string }) => f.token) });
+    expect(sub.status).toBe(400);
+    expect((await sub.json()).error.details.fields[0].field).toBe('uploads.1');
+    expect(await counts()).toEqual(before);
+    expect(await db('makers').where({ slug: `${P.toLowerCase()}-brand-new-maker` }).first()).toBeUndefined();
+  });
+
+  it('rejects a bad submission body naming each field', async () => {
+    const sub = await submit({ driver: { slug: 'Not A Slug' }, method: { ...method, distanceM: -1 }, uploads: [] });
+    expect(sub.status).toBe(400);
+    const fields = (await sub.json()).error.details.fields.map((f: { field: string }) => f.field);
+    expect(fields).toEqual(expect.arrayContaining(['method.distanceM', 'uploads']));
+  });
+});
