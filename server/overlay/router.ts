@@ -15,7 +15,13 @@ export function createOverlayRouter(db: Knex, options: OverlayServiceOptions = {
   const service = createOverlayService(createDriversRepository(db), createOverlayRepository(db), options);
   const router = Router();
   router.get('/overlay', async (req, res) => {
-    res.type('application/json').send(await service.overlayJson(parseOr400(overlayQuerySchema, req.query, 'query')));
+    const body = await service.overlayJson(parseOr400(overlayQuerySchema, req.query, 'query'));
+    res.set('ETag', body.etag);
+    if (req.fresh) {
+      res.status(304).end();
+      return;
+    }
+    res.type('application/json').send(body.bytes);
   });
   const mayWrite = options.allowAnonymousSave ? [] : [requireRole('member')];
   router.post('/overlays', ...mayWrite, async (req, res) => {

@@ -1,4 +1,4 @@
-import { randomBytes } from 'node:crypto';
+import { createHash, randomBytes } from 'node:crypto';
 import { interpolateLog, logFrequencyGrid } from '../../shared/acoustics/curves';
 import { errorCodes } from '../../shared/api/errors';
 import { computeDerivedFigures } from '../../shared/catalogue/derived-figures';
@@ -28,6 +28,11 @@ function onGrid(c: Curve, values: readonly number[] = c.y, digits: number | 'sig
     if (v === null) return null;
     return digits === 'sig3' ? Number(v.toPrecision(3)) : Math.round(v * scale) / scale;
   });
+}
+
+export interface CachedBody {
+  bytes: Buffer;
+  etag: string;
 }
 
 export interface OverlayServiceOptions {
@@ -94,7 +99,7 @@ export function createOverlayService(drivers: DriversRepository, repo: OverlayRe
 
   // Comparisons are read far more often than the catalogue changes (a linked write-up is opened by
   // every reader), so built responses are kept, serialised, until the catalogue version moves.
-  const cache = new Map<string, string>();
+  const cache = new Map<string, CachedBody>();
   const CACHE_MAX = 500;
   let cacheVersion = '';
   let checkedAt = 0;
@@ -111,8 +116,8 @@ export function createOverlayService(drivers: DriversRepository, repo: OverlayRe
   }
 
   return {
-    /** The comparison as JSON text, from the cache when the catalogue has not changed. */
-    async overlayJson(q: OverlayQuery): Promise<string> {
+    /** The comparison as JSON bytes with its ETag, from the cache when the catalogue has not changed. */
+    async overlayJson(q: OverlayQuery): Promise<CachedBody> {
       await freshCache();
       const key = JSON.stringify([q.drivers, q.sets, q.bandLo, q.bandHi]);
       const hit = cache.get(key);
@@ -121,7 +126,9 @@ export function createOverlayService(drivers: DriversRepository, repo: OverlayRe
         cache.set(key, hit);
         return hit;
       }
-      const body = JSON.stringify(await this.overlay(q));
+      const bytes = Buffer.from(JSON.stringify(await this.overlay(q)));
+      // Hashing once here spares Express from hashing the same bytes on every response.
+      const body = { bytes, etag: `"${createHash('sha1').update(bytes).digest('base64url')}"` };
       cache.set(key, body);
       if (cache.size > CACHE_MAX) cache.delete(cache.keys().next().value as string);
       return body;
