@@ -64,6 +64,8 @@ const driverColumns = [
   'm.slug as makerSlug', 'm.name as makerName',
 ];
 
+const MAX_MERGE_HOPS = 8;
+
 function parseJson<T>(value: unknown): T {
   return (typeof value === 'string' ? JSON.parse(value) : value) as T;
 }
@@ -137,6 +139,25 @@ export function createDriversRepository(db: Knex) {
     async findDriverIdByAliasSlug(slug: string): Promise<number | undefined> {
       const row = await db('driver_aliases').where({ slug }).first('driver_id');
       return row?.driver_id;
+    },
+
+    /** The surviving entry for an id, following merge pointers (bounded in case bad data loops). */
+    async canonicalById(id: number): Promise<DriverRow | undefined> {
+      let row = await this.findDriverById(id);
+      for (let hops = 0; row && row.canonicalId !== null && hops < MAX_MERGE_HOPS; hops++) row = await this.findDriverById(row.canonicalId);
+      return row;
+    },
+
+    /** The surviving entry for a slug or an old slug. */
+    async resolveSlug(slug: string): Promise<DriverRow | undefined> {
+      const direct = await this.findDriverBySlug(slug);
+      const id = direct?.id ?? (await this.findDriverIdByAliasSlug(slug));
+      return id === undefined ? undefined : this.canonicalById(id);
+    },
+
+    /** Sensitivity at the type's reference band, as search shows it. */
+    async listedSensitivity(driverId: number): Promise<number | null> {
+      return (await db('driver_figures').where({ driver_id: driverId }).first('sensitivity_db'))?.sensitivity_db ?? null;
     },
 
     async aliasesFor(driverId: number): Promise<string[]> {

@@ -12,8 +12,6 @@ export interface DriversServiceOptions {
 
 const toMm = (m: number | null) => (m === null ? null : Math.round(m * 10000) / 10);
 
-/** Follows merge pointers to the surviving entry; bounded in case of a cycle in bad data. */
-const MAX_MERGE_HOPS = 8;
 
 export function createDriversService(repo: DriversRepository, options: DriversServiceOptions = {}) {
   const staleAfterMs = options.staleAfterMs ?? 2000;
@@ -43,18 +41,6 @@ export function createDriversService(repo: DriversRepository, options: DriversSe
     return building;
   }
 
-  async function resolve(slug: string) {
-    let row = await repo.findDriverBySlug(slug);
-    if (!row) {
-      const id = await repo.findDriverIdByAliasSlug(slug);
-      if (id !== undefined) row = await repo.findDriverById(id);
-    }
-    for (let hops = 0; row && row.canonicalId !== null && hops < MAX_MERGE_HOPS; hops++) {
-      row = await repo.findDriverById(row.canonicalId);
-    }
-    return row;
-  }
-
   return {
     async list(query: DriverListQuery): Promise<DriverListResponse> {
       return (await currentIndex()).search(query);
@@ -67,16 +53,17 @@ export function createDriversService(repo: DriversRepository, options: DriversSe
     },
 
     async get(slug: string, band?: { lo: number; hi: number }): Promise<DriverDetail> {
-      const row = await resolve(slug);
+      const row = await repo.resolveSlug(slug);
       if (!row) throw notFound(`Driver "${slug}"`);
       const sets = await repo.setsForDriver(row.id);
       const setIds = sets.map((s) => s.id);
-      const [params, curves, aliases, mounting, makerSpecs] = await Promise.all([
+      const [params, curves, aliases, mounting, makerSpecs, sensitivityDb] = await Promise.all([
         repo.parametersForSets(setIds),
         repo.curvesForSets(setIds),
         repo.aliasesFor(row.id),
         repo.mountingFor(row.id),
         repo.makerSpecsFor(row.id),
+        repo.listedSensitivity(row.id),
       ]);
       const measurementSets = sets.map((s) => ({
         id: s.id,
@@ -112,7 +99,7 @@ export function createDriversService(repo: DriversRepository, options: DriversSe
         qts: p('qts'),
         vasL: p('vas') === null ? null : (p('vas') as number) * 1000,
         xmaxMm: p('xmax') === null ? null : (p('xmax') as number) * 1000,
-        sensitivityDb: figures[0]?.band.lo === referenceBandFor(row.type).lo && figures[0]?.band.hi === referenceBandFor(row.type).hi ? figures[0].sensitivityDb : null,
+        sensitivityDb,
         price: row.price,
         currency: row.currency,
         aliases,

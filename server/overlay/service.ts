@@ -7,14 +7,13 @@ import { referenceBandFor } from '../../shared/schemas/drivers';
 import type { OverlayDriver, OverlayQuery, OverlayResponse, SavedOverlay } from '../../shared/schemas/overlay';
 import { overlayOptionsSchema, type saveOverlaySchema } from '../../shared/schemas/overlay';
 import type { z } from 'zod';
-import type { DriversRepository, DriverRow } from '../drivers/repository';
+import type { DriversRepository } from '../drivers/repository';
 import { ApiError, notFound } from '../http/api-error';
 import type { OverlayRepository } from './repository';
 
 /** The display grid: the storage grid's 1/48-octave points from 20 Hz to 20 kHz. */
 export const OVERLAY_GRID = logFrequencyGrid(48, 20, 20000).map((f) => Number(f.toPrecision(6)));
 
-const MAX_MERGE_HOPS = 8;
 const CODE_ALPHABET = 'abcdefghijkmnpqrstuvwxyz23456789';
 
 /**
@@ -43,24 +42,8 @@ export interface OverlayServiceOptions {
 }
 
 export function createOverlayService(drivers: DriversRepository, repo: OverlayRepository, options: OverlayServiceOptions = {}) {
-  async function resolve(slug: string): Promise<DriverRow | undefined> {
-    let row = await drivers.findDriverBySlug(slug);
-    if (!row) {
-      const id = await drivers.findDriverIdByAliasSlug(slug);
-      if (id !== undefined) row = await drivers.findDriverById(id);
-    }
-    for (let hops = 0; row && row.canonicalId !== null && hops < MAX_MERGE_HOPS; hops++) row = await drivers.findDriverById(row.canonicalId);
-    return row;
-  }
-
-  async function canonicalById(id: number): Promise<DriverRow | undefined> {
-    let row = await drivers.findDriverById(id);
-    for (let hops = 0; row && row.canonicalId !== null && hops < MAX_MERGE_HOPS; hops++) row = await drivers.findDriverById(row.canonicalId);
-    return row;
-  }
-
   async function one(slug: string, setId: number | null, band: { lo: number; hi: number } | null, place: number): Promise<OverlayDriver> {
-    const row = await resolve(slug);
+    const row = await drivers.resolveSlug(slug);
     if (!row) throw new ApiError(404, errorCodes.notFound, `Driver "${slug}" was not found`, { fields: [{ field: `drivers.${place}`, message: 'no such driver' }] });
     const sets = await drivers.setsForDriver(row.id);
     if (sets.length === 0) throw new ApiError(404, errorCodes.notFound, `Driver "${slug}" has no approved measurements yet`);
@@ -146,7 +129,7 @@ export function createOverlayService(drivers: DriversRepository, repo: OverlayRe
       }
       const entries: { driverId: number; setId: number | null }[] = [];
       for (const [i, e] of input.entries.entries()) {
-        const row = await resolve(e.slug);
+        const row = await drivers.resolveSlug(e.slug);
         if (!row) throw new ApiError(400, errorCodes.validation, `Driver "${e.slug}" was not found`, { fields: [{ field: `entries.${i}.slug`, message: 'no such driver' }] });
         if (e.setId !== null && !(await repo.setBelongsTo(e.setId, row.id))) {
           throw new ApiError(400, errorCodes.validation, `Set ${e.setId} is not an approved set of "${e.slug}"`, { fields: [{ field: `entries.${i}.setId`, message: 'not a set of this driver' }] });
@@ -172,7 +155,7 @@ export function createOverlayService(drivers: DriversRepository, repo: OverlayRe
       for (const e of row.entries) {
         // A set follows its driver through a merge; use wherever the set now lives.
         const driverId = e.setId !== null ? ((await repo.driverOfSet(e.setId)) ?? e.driverId) : e.driverId;
-        const current = await canonicalById(driverId);
+        const current = await drivers.canonicalById(driverId);
         if (current) entries.push({ slug: current.slug, setId: e.setId });
       }
       return { code: row.code, title: row.title, note: row.note, entries, options: overlayOptionsSchema.parse(row.options), createdAt: row.createdAt };

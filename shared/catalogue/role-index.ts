@@ -152,21 +152,16 @@ const fmtHz = (f: number) => (f >= 1000 ? `${Number((f / 1000).toFixed(2))} kHz`
  * doubling of THD above 0.3 %, minus four per octave the driver beams inside the band. Drivers whose
  * response does not cover the band score -Infinity and sort last.
  */
-export function scoreRole(bands: RoleBands, req: RoleRequest, options: { explain?: boolean } = {}): RoleScore {
-  // Ranking thousands of drivers only needs numbers; the text is built for the page shown.
-  const explain = options.explain ?? true;
+export function scoreRole(bands: RoleBands, req: RoleRequest): RoleScore {
   const lin = bandMean(bands.spl, req.bandLo, req.bandHi);
   if (!lin) {
     return { score: -Infinity, sensitivityDb: null, linearityDb: null, thdPercent: null, beamingHz: null, reasons: [`no measured response across ${fmtHz(req.bandLo)}–${fmtHz(req.bandHi)}`] };
   }
   const reasons: string[] = [];
-  const say = (text: () => string) => {
-    if (explain) reasons.push(text());
-  };
   const linearityDb = Math.max(lin.up, -lin.down);
   let score = lin.mean - 85 - 2 * linearityDb;
-  say(() => `${lin.mean.toFixed(1)} dB mean sensitivity in ${fmtHz(req.bandLo)}–${fmtHz(req.bandHi)}`);
-  say(() => `within +${lin.up.toFixed(1)} / ${lin.down.toFixed(1)} dB of that mean (1/3-octave bands)`);
+  reasons.push(`${lin.mean.toFixed(1)} dB mean sensitivity in ${fmtHz(req.bandLo)}–${fmtHz(req.bandHi)}`);
+  reasons.push(`within +${lin.up.toFixed(1)} / ${lin.down.toFixed(1)} dB of that mean (1/3-octave bands)`);
 
   const volts = 2.83 * 10 ** ((req.level - lin.mean) / 20);
   const thd = thdAtDrive(bands, req.bandLo, req.bandHi, volts);
@@ -174,22 +169,22 @@ export function scoreRole(bands: RoleBands, req: RoleRequest, options: { explain
   if (thd) {
     thdPercent = thd.percent;
     score -= 6 * Math.max(0, Math.log2(thd.percent / 0.3));
-    say(() => `THD up to ${thd.percent < 1 ? thd.percent.toFixed(2) : thd.percent.toFixed(1)} % at ${req.level} dB (${volts.toFixed(1)} V)${thd.extrapolated ? ', beyond the measured levels' : ''}`);
+    reasons.push(`THD up to ${thd.percent < 1 ? thd.percent.toFixed(2) : thd.percent.toFixed(1)} % at ${req.level} dB (${volts.toFixed(1)} V)${thd.extrapolated ? ', beyond the measured levels' : ''}`);
   } else {
-    say(() => 'no distortion data in this band');
+    reasons.push('no distortion data in this band');
     score -= 6;
   }
 
   const beamingHz = beamingFromBands(bands, 6, Math.min(req.bandLo, 200));
   const angle = bands.offAngleDeg ?? 0;
   if (beamingHz === null) {
-    say(() => (bands.offAngleDeg === null ? 'no off-axis data' : `stays within 6 dB at ${angle}° across the band`));
+    reasons.push(bands.offAngleDeg === null ? 'no off-axis data' : `stays within 6 dB at ${angle}° across the band`);
   } else if (beamingHz < req.bandHi) {
     const octaves = Math.log2(req.bandHi / beamingHz);
     score -= 4 * octaves;
-    say(() => `beams from ${fmtHz(beamingHz)} (${angle}° down 6 dB), inside the band`);
+    reasons.push(`beams from ${fmtHz(beamingHz)} (${angle}° down 6 dB), inside the band`);
   } else {
-    say(() => `stays wide to ${fmtHz(beamingHz)} (${angle}° within 6 dB)`);
+    reasons.push(`stays wide to ${fmtHz(beamingHz)} (${angle}° within 6 dB)`);
   }
   return { score: Number(score.toFixed(2)), sensitivityDb: Number(lin.mean.toFixed(2)), linearityDb: Number(linearityDb.toFixed(2)), thdPercent, beamingHz, reasons };
 }
