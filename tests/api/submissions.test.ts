@@ -41,9 +41,15 @@ describe('reviewer submissions', () => {
   };
   const submit = (body: unknown) =>
     fetch(`${server.url}/api/submissions`, { method: 'POST', body: JSON.stringify(body), headers: { cookie: reviewer, origin: server.url, 'content-type': 'application/json' } });
-  const counts = async () => {
-    const n = async (t: string) => Number((await db(t).count({ n: '*' }).first())?.n);
-    return { makers: await n('makers'), drivers: await n('drivers'), sets: await n('measurement_sets'), curves: await n('curves'), attached: Number((await db('upload_files').whereNotNull('set_id').count({ n: '*' }).first())?.n) };
+  // Other API suites run alongside this one and write to the same tables, so the counts cover only
+  // rows this suite could have written: makers under its prefix and everything hanging off them.
+  const counts = async (tokens: string[]) => {
+    const makerIds = (await db('makers').where('slug', 'like', `${P}%`).select('id')).map((m: { id: number }) => m.id);
+    const driverIds = (await db('drivers').whereIn('maker_id', makerIds).select('id')).map((d: { id: number }) => d.id);
+    const setIds = (await db('measurement_sets').whereIn('driver_id', driverIds).select('id')).map((s: { id: number }) => s.id);
+    const curves = Number((await db('curves').whereIn('set_id', setIds).count({ n: '*' }).first())?.n);
+    const attached = Number((await db('upload_files').whereIn('token', tokens).whereNotNull('set_id').count({ n: '*' }).first())?.n);
+    return { makers: makerIds.length, drivers: driverIds.length, sets: setIds.length, curves, attached };
   };
   const method = { driveVoltageV: 5.66, distanceM: 0.5, baffle: 'test baffle 600 x 400 mm', temperatureC: 21, sampleId: 'S1', burnIn: 'out-of-box' };
 
@@ -99,11 +105,13 @@ describe('reviewer submissions', () => {
     // Damage the second stored original: it fails when re-read, after the maker, driver, set and
     // first curve have been written inside the transaction.
     await db('upload_files').where({ token: files[1].token }).update({ bytes: Buffer.from('frequency,thd\nnot,a number\n') });
-    const before = await counts();
+    const tokens = files.map((f: { token: string }) => f.token);
+    const before = await counts(tokens);
     const sub = await submit({ driver: { makerName: `${P} Brand New Maker`, model: 'Never 1', type: 'tweeter', nominalSizeIn: 1, nominalImpedanceOhm: 6 }, method, uploads: files.map((f: { token: string }) => f.token) });
     expect(sub.status).toBe(400);
     expect((await sub.json()).error.details.fields[0].field).toBe('uploads.1');
-    expect(await counts()).toEqual(before);
+    expect(await counts(tokens)).toEqual(before);
+    expect(before.attached).toBe(0);
     expect(await db('makers').where({ slug: `${P.toLowerCase()}-brand-new-maker` }).first()).toBeUndefined();
   });
 
