@@ -1,4 +1,4 @@
-import { SubmitScreen } from '../features/account';
+import { SubmitScreen } from '../features/submissions';
 
 export default function SubmitRoute() {
   return <SubmitScreen />;

@@ -73,7 +73,7 @@ describe('accounts and roles in the browser', () => {
     await signInAs(login, false);
     await expect(s.page.getByTestId('account-role').first().textContent()).resolves.toBe('reviewer');
     await s.page.getByTestId('submit-link').first().click();
-    await s.page.getByTestId('submit-screen').getByText(/hearing protection/).waitFor();
+    await s.page.getByTestId('submit-screen').getByTestId('submit-step-driver').waitFor();
     expect(s.errors).toEqual([]);
   });
 });

@@ -5,4 +5,3 @@ export { signInHref } from './api/account-api';
 export { AdminScreen } from './screens/admin-screen';
 export { SignInScreen } from './screens/signin-screen';
 export { SavedScreen } from './screens/saved-screen';
-export { SubmitScreen } from './screens/submit-screen';

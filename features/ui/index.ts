@@ -3,6 +3,9 @@ export { breakpointFor, useBreakpoint, WIDE_MIN_WIDTH, type Breakpoint } from '.
 export { AppProviders } from './components/app-providers';
 export { ScreenFrame } from './components/screen-frame';
 export { ClientOnly } from './components/hydrated';
-export { fetchJson, postJson, sendJson, ApiRequestError } from './api/fetch-json';
+export { apiBase, fetchJson, postJson, sendJson, ApiRequestError } from './api/fetch-json';
 export { NotFoundScreen } from './components/not-found-screen';
 export { ActionButton, Card, DebouncedTextInput, SectionTitle, ToggleChip } from './components/controls';
+export { NumberField, TextField } from './components/number-field';
+export { FieldGrid } from './components/field-grid';
+export { ChoiceToggle } from './components/choice-toggle';

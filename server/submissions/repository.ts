@@ -1,4 +1,6 @@
 import type { Knex } from 'knex';
+import type { NearDuplicateCandidate } from '../../shared/catalogue/near-duplicates';
+import type { MySubmission } from '../../shared/schemas/submissions';
 
 export function createSubmissionsRepository(db: Knex) {
   return {
@@ -67,12 +69,36 @@ export function createSubmissionsRepository(db: Knex) {
       await trx('upload_files').whereIn('id', uploadIds).update({ set_id: setId });
     },
 
-    async mine(userId: number) {
+    /**
+     * Every driver, merged ones included (their slugs still redirect), as id, slug, model, maker
+     * name, aliases and status only: no curves, parameters or figures. The catalogue is small (tens
+     * of drivers), so the fuzzy comparison runs in memory rather than behind a SQL prefilter.
+     */
+    async nearDuplicateCandidates(): Promise<NearDuplicateCandidate[]> {
+      const rows: { id: number; slug: string; model: string; makerName: string; listed: number | string }[] = await db('drivers as d')
+        .join('makers as m', 'm.id', 'd.maker_id')
+        .orderBy('d.id')
+        .select('d.id', 'd.slug', 'd.model', 'm.name as makerName')
+        // A driver created by a submission stays pending until a moderator approves one of its sets.
+        .select(db.raw('exists (select 1 from measurement_sets s where s.driver_id = d.id and s.status = ?) as listed', ['approved']));
+      const aliases: { driverId: number; alias: string }[] = await db('driver_aliases').orderBy('id').select('driver_id as driverId', 'alias');
+      const byDriver = new Map<number, string[]>();
+      for (const a of aliases) byDriver.set(a.driverId, [...(byDriver.get(a.driverId) ?? []), a.alias]);
+      return rows.map((r) => ({
+        id: r.id, slug: r.slug, model: r.model, makerName: r.makerName, aliases: byDriver.get(r.id) ?? [],
+        status: Number(r.listed) ? 'listed' : 'pending',
+      }));
+    },
+
+    async mine(userId: number): Promise<MySubmission[]> {
       return db('measurement_sets as s')
         .join('drivers as d', 'd.id', 's.driver_id')
+        .join('makers as m', 'm.id', 'd.maker_id')
         .where({ 's.submitted_by': userId })
         .orderBy('s.id', 'desc')
-        .select('s.id', 's.status', 's.label', 's.created_at as createdAt', 'd.slug as driverSlug', 'd.model');
+        .select('s.id', 's.status', 's.label', 's.created_at as createdAt', 'd.slug as driverSlug', 'd.model', 'm.name as makerName')
+        .select(db.raw('(select count(*) from curves c where c.set_id = s.id) as curveCount'))
+        .then((rows: Record<string, unknown>[]) => rows.map((r) => ({ ...r, curveCount: Number(r.curveCount) }) as MySubmission));
     },
   };
 }

@@ -2,7 +2,7 @@ import { Router } from 'express';
 import type { Knex } from 'knex';
 import multer from 'multer';
 import { errorCodes } from '../../shared/api/errors';
-import { submissionSchema, uploadMetaSchema } from '../../shared/schemas/submissions';
+import { nearDuplicateQuerySchema, submissionSchema, uploadMetaSchema } from '../../shared/schemas/submissions';
 import type { User } from '../../shared/schemas/users';
 import { ApiError, parseOr400 } from '../http/api-error';
 import { currentUser, requireRole } from '../http/require-role';
@@ -40,6 +40,9 @@ export function createSubmissionsRouter(db: Knex): Router {
   });
   router.get('/submissions/mine', reviewer, async (req, res) => {
     res.json({ submissions: await service.mine(currentUser(req) as User) });
+  });
+  router.get('/submissions/near-duplicates', reviewer, async (req, res) => {
+    res.json(await service.nearDuplicates(parseOr400(nearDuplicateQuerySchema, req.query, 'query')));
   });
   return router;
 }

@@ -1,7 +1,8 @@
 import { randomBytes } from 'node:crypto';
 import { interpolateLog, logFrequencyGrid } from '../../shared/acoustics/curves';
 import { errorCodes } from '../../shared/api/errors';
-import type { UploadMeta } from '../../shared/schemas/submissions';
+import { findNearDuplicates } from '../../shared/catalogue/near-duplicates';
+import type { NearDuplicateQuery, NearDuplicatesResponse, UploadMeta } from '../../shared/schemas/submissions';
 import type { submissionSchema } from '../../shared/schemas/submissions';
 import type { User } from '../../shared/schemas/users';
 import { parseMeasurementFile, type ParseResult } from '../../shared/uploads';
@@ -11,7 +12,10 @@ import type { SubmissionsRepository } from './repository';
 
 const GRID = logFrequencyGrid();
 const ACOUSTIC = new Set(['spl', 'impedance', 'thd', 'h2', 'h3', 'imd']);
-const UNITS: Record<string, string> = { fs: 'Hz', re: 'ohm', le: 'H', bl: 'T·m', mms: 'kg', cms: 'm/N', sd: 'm^2', vas: 'm^3', xmax: 'm' };
+const UNITS: Record<string, string> = {
+  fs: 'Hz', re: 'ohm', le: 'H', bl: 'T·m', mms: 'kg', mmd: 'kg', cms: 'm/N', kms: 'N/m', rms: 'kg/s', sd: 'm^2', vas: 'm^3', xmax: 'm',
+  x_bl: 'm', x_c: 'm', x_l: 'm', bl0: 'T·m', kms0: 'N/m',
+};
 
 export interface UploadedFile {
   originalname: string;
@@ -99,5 +103,10 @@ export function createSubmissionsService(repo: SubmissionsRepository) {
     },
 
     mine: (user: User) => repo.mine(user.id),
+
+    /** Entries that may already be the driver a reviewer is about to create, strongest first. */
+    async nearDuplicates(input: NearDuplicateQuery): Promise<NearDuplicatesResponse> {
+      return { candidates: findNearDuplicates(input, await repo.nearDuplicateCandidates()) };
+    },
   };
 }

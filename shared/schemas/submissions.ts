@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import type { NearDuplicate } from '../catalogue/near-duplicates';
 import { burnInSchema, curveKindSchema, driverTypeSchema } from './drivers';
 
 /** One entry per uploaded file, in the same order as the files, sent as the `meta` form field. */
@@ -59,3 +60,29 @@ export const submissionSchema = z
   })
   .strict();
 export type SubmissionInput = z.input<typeof submissionSchema>;
+
+/** `GET /api/submissions/near-duplicates`: the maker and model a reviewer is about to enter. */
+export const nearDuplicateQuerySchema = z
+  .object({
+    makerName: z.string().trim().min(1, 'name the maker').max(200),
+    model: z.string().trim().min(1, 'name the model').max(200),
+  })
+  .strict();
+export type NearDuplicateQuery = z.infer<typeof nearDuplicateQuerySchema>;
+
+/** Strongest first; empty when nothing in the catalogue looks like the same driver. */
+export interface NearDuplicatesResponse {
+  candidates: NearDuplicate[];
+}
+
+/** One of the reviewer's own submissions, newest first, as `GET /api/submissions/mine` lists them. */
+export interface MySubmission {
+  id: number;
+  status: 'pending' | 'approved' | 'rejected';
+  label: string;
+  createdAt: string;
+  driverSlug: string;
+  model: string;
+  makerName: string;
+  curveCount: number;
+}

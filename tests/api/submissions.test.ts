@@ -1,7 +1,7 @@
 import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { parseMeasurementFile } from '../../shared/uploads';
-import { createTestDb } from '../support/test-db';
+import { createTestDb, removePrefixed } from '../support/test-db';
 import { signIn, startTestServer } from '../support/sign-in';
 
 const P = 'apitest-subm';
@@ -13,12 +13,7 @@ describe('reviewer submissions', () => {
   let reviewer = '';
   let member = '';
 
-  const cleanup = async () => {
-    const makers = await db('makers').where('slug', 'like', `${P}%`).select('id');
-    await db('drivers').whereIn('maker_id', makers.map((m: { id: number }) => m.id)).delete();
-    await db('makers').where('slug', 'like', `${P}%`).delete();
-    await db('users').where('login', 'like', `${P}-%`).delete();
-  };
+  const cleanup = () => removePrefixed(db, P);
 
   beforeAll(async () => {
     await cleanup();
@@ -93,7 +88,7 @@ describe('reviewer submissions', () => {
     expect(stored.map((r: { file_name: string }) => r.file_name).sort()).toEqual(['impedance-3col-header.csv', 'spl-0deg-tab.txt']);
     expect(Buffer.from(stored.find((r: { file_name: string }) => r.file_name === 'spl-0deg-tab.txt').bytes).equals(readFileSync(join(fixtures, 'spl-0deg-tab.txt')))).toBe(true);
     const mine = await (await fetch(`${server.url}/api/submissions/mine`, { headers: { cookie: reviewer } })).json();
-    expect(mine.submissions[0]).toMatchObject({ id: setId, status: 'pending', model: 'Test 80' });
+    expect(mine.submissions[0]).toMatchObject({ id: setId, status: 'pending', model: 'Test 80', makerName: `${P} Works`, curveCount: 2 });
     // Pending work is not in the public catalogue until a moderator approves it.
     const search = await (await fetch(`${server.url}/api/drivers?q=${encodeURIComponent(`${P} Works Test 80`)}`)).json();
     expect(search.items.map((d: { model: string }) => d.model)).not.toContain('Test 80');

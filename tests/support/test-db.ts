@@ -10,3 +10,11 @@ export function testDbSettings() {
 export function createTestDb(): Knex {
   return createDb(testDbSettings());
 }
+
+/** Removes the makers, drivers (with everything hanging off them) and users a suite created under its prefix. */
+export async function removePrefixed(db: Knex, prefix: string): Promise<void> {
+  const makers = await db('makers').where('slug', 'like', `${prefix}%`).select('id');
+  await db('drivers').whereIn('maker_id', makers.map((m: { id: number }) => m.id)).delete();
+  await db('makers').where('slug', 'like', `${prefix}%`).delete();
+  await db('users').where('login', 'like', `${prefix}-%`).delete();
+}

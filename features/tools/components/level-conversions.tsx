@@ -1,15 +1,12 @@
 import { useState, type ReactNode } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import type { LevelsCalcInput } from '../../../shared/schemas/calc';
-import { colors, fonts, space } from '../../ui';
+import { ChoiceToggle, colors, FieldGrid, fonts, NumberField, space } from '../../ui';
 import type { LevelsResult } from '../api/calc-api';
 import { useCalc } from '../hooks/use-calc';
 import { useNumberFields, type FieldSpec } from '../hooks/use-number-fields';
 import { CalcCard, FormError, ResultBlock } from './calc-card';
-import { ChoiceToggle } from './choice-toggle';
 import { displayUnits, formatNumber } from './display-units';
-import { FieldGrid } from './field-grid';
-import { NumberField } from './number-field';
 import { ResultRow } from './result-row';
 import { LEVEL_CAUTION } from './safety';
 

@@ -1,13 +1,11 @@
 import { StyleSheet, Text, View } from 'react-native';
 import type { ThieleSmallCalcInput } from '../../../shared/schemas/calc';
-import { colors, fonts, space } from '../../ui';
+import { colors, FieldGrid, fonts, NumberField, space } from '../../ui';
 import type { ThieleSmallResult } from '../api/calc-api';
 import { useCalc } from '../hooks/use-calc';
-import { useNumberFields, type FieldSpec } from '../hooks/use-number-fields';
+import { useNumberFields, type FieldSpec, type NumberFields } from '../hooks/use-number-fields';
 import { CalcCard, FormError, ResultBlock, waitingMessage } from './calc-card';
 import { displayUnits, formatNumber, toDisplay, type DisplayUnit } from './display-units';
-import { FieldGrid } from './field-grid';
-import { NumberField } from './number-field';
 import { ResultRow } from './result-row';
 
 type ParamKey = 'fs' | 'qms' | 'qes' | 'qts' | 're' | 'le' | 'bl' | 'mms' | 'mmd' | 'cms' | 'kms' | 'rms' | 'sd' | 'diameter' | 'vas' | 'xmax';
@@ -50,8 +48,32 @@ const figures: { key: string; label: string; unit: DisplayUnit; scale?: number; 
 
 const num = (v: unknown): number | undefined => (typeof v === 'number' ? v : undefined);
 
-export function ParameterCompletion() {
-  const f = useNumberFields(spec);
+export type ParameterFieldKey = Key;
+export type ParameterFields = NumberFields<Key>;
+
+/** The fields' state, for a screen that fills them itself (a pasted block) and reads the values. */
+export function useParameterFields(): ParameterFields {
+  return useNumberFields(spec);
+}
+
+/** Writes SI values (from a pasted block) into the fields in their display units; returns the keys filled. */
+export function fillParameterFields(fields: ParameterFields, si: Partial<Record<ParamKey, number>>): ParamKey[] {
+  const filled: ParamKey[] = [];
+  for (const p of params) {
+    const v = si[p.key];
+    if (v === undefined) continue;
+    fields.setText(p.key, toDisplay(v, p.unit, 6));
+    filled.push(p.key);
+  }
+  return filled;
+}
+
+export function ParameterCompletion({
+  fields, testID = 'thiele-small', title = 'Parameter completion',
+  lede = 'Enter whichever small-signal parameters you have; the rest follow where the relations allow.',
+}: { fields?: ParameterFields; testID?: string; title?: string; lede?: string } = {}) {
+  const own = useNumberFields(spec);
+  const f = fields ?? own;
   const { temperatureC, ...given } = f.values;
   const hasAny = Object.values(given).some((v) => v !== undefined);
   const body: ThieleSmallCalcInput | null = !f.hasLocalErrors && hasAny ? { ...given, ...(temperatureC !== undefined ? { temperatureC } : {}) } : null;
@@ -62,8 +84,8 @@ export function ParameterCompletion() {
 
   return (
     <CalcCard
-      title="Parameter completion"
-      lede="Enter whichever small-signal parameters you have; the rest follow where the relations allow."
+      title={title}
+      lede={lede}
       source="Thiele 1971; Small, JAES 1972 (efficiency, sensitivity, Vas); EBP and Vd are common practice"
       constants={
         air
@@ -71,7 +93,7 @@ export function ParameterCompletion() {
           : 'air density (ISO 2533) and speed of sound (ISO 9613-1) at the temperature given; p_ref = 20 µPa'
       }
       pending={calc.pending}
-      testID="thiele-small"
+      testID={testID}
     >
       <FieldGrid>
         {params.map((p) => (
@@ -83,7 +105,7 @@ export function ParameterCompletion() {
             onChangeText={(t) => f.setText(p.key, t)}
             error={err(p.key)}
             placeholder={p.placeholder}
-            testID={`thiele-small-${p.key}`}
+            testID={`${testID}-${p.key}`}
           />
         ))}
         <NumberField
@@ -92,19 +114,19 @@ export function ParameterCompletion() {
           value={f.text.temperatureC}
           onChangeText={(t) => f.setText('temperatureC', t)}
           error={err('temperatureC')}
-          testID="thiele-small-temperatureC"
+          testID={`${testID}-temperatureC`}
         />
       </FieldGrid>
-      <FormError message={body ? calc.error : undefined} testID="thiele-small-error" />
+      <FormError message={body ? calc.error : undefined} testID={`${testID}-error`} />
       {r && r.warnings.length > 0 ? (
-        <View style={styles.warnings} testID="thiele-small-warnings">
+        <View style={styles.warnings} testID={`${testID}-warnings`}>
           <Text style={styles.warnTitle}>Consistency</Text>
           {r.warnings.map((w) => (
             <Text key={w.relation + w.message} style={styles.warn}>• {w.message}</Text>
           ))}
         </View>
       ) : null}
-      <ResultBlock testID="thiele-small-results" message={r ? undefined : waitingMessage(body !== null, calc, 'Enter at least one parameter.')}>
+      <ResultBlock testID={`${testID}-results`} message={r ? undefined : waitingMessage(body !== null, calc, 'Enter at least one parameter.')}>
         {r ? (
           <>
             <Text style={styles.section}>Completed set</Text>
@@ -112,7 +134,7 @@ export function ParameterCompletion() {
               const pv = r.provenance[p.key];
               const note = !pv || pv.source === 'input' ? 'given' : `from ${pv.from.join(', ')}: ${pv.formula}`;
               return (
-                <ResultRow key={p.key} label={p.label} value={toDisplay(num(r[p.key]), p.unit)} unit={displayUnits[p.unit].symbol} note={note} testID={`thiele-small-result-${p.key}`} />
+                <ResultRow key={p.key} label={p.label} value={toDisplay(num(r[p.key]), p.unit)} unit={displayUnits[p.unit].symbol} note={note} testID={`${testID}-result-${p.key}`} />
               );
             })}
             {figures.some((g) => num(r[g.key]) !== undefined) ? <Text style={styles.section}>Figures</Text> : null}
@@ -120,11 +142,11 @@ export function ParameterCompletion() {
               const v = num(r[g.key]) as number;
               const text = g.scale ? formatNumber(v * g.scale, 3) : g.unit === 'db' ? v.toFixed(1) : toDisplay(v, g.unit);
               return (
-                <ResultRow key={g.key} label={g.label} value={text} unit={g.suffix ?? displayUnits[g.unit].symbol} note={r.provenance[g.key]?.formula} testID={`thiele-small-result-${g.key}`} />
+                <ResultRow key={g.key} label={g.label} value={text} unit={g.suffix ?? displayUnits[g.unit].symbol} note={r.provenance[g.key]?.formula} testID={`${testID}-result-${g.key}`} />
               );
             })}
             {r.missing.length > 0 ? (
-              <Text style={styles.missing} testID="thiele-small-missing">Not determined from these inputs: {r.missing.join(', ')}</Text>
+              <Text style={styles.missing} testID={`${testID}-missing`}>Not determined from these inputs: {r.missing.join(', ')}</Text>
             ) : null}
           </>
         ) : null}

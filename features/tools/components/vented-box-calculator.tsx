@@ -1,13 +1,11 @@
 import { useState } from 'react';
+import { ChoiceToggle, FieldGrid, NumberField } from '../../ui';
 import type { VentedBoxCalcInput } from '../../../shared/schemas/calc';
 import type { VentedBoxResult } from '../api/calc-api';
 import { useCalc } from '../hooks/use-calc';
 import { useNumberFields, type FieldSpec } from '../hooks/use-number-fields';
 import { CalcCard, FormError, ResultBlock, waitingMessage } from './calc-card';
-import { ChoiceToggle } from './choice-toggle';
 import { displayUnits, toDisplay } from './display-units';
-import { FieldGrid } from './field-grid';
-import { NumberField } from './number-field';
 import { ResultRow } from './result-row';
 import { BOX_CAUTION } from './safety';
 

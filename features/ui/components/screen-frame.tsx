@@ -67,6 +67,6 @@ const styles = StyleSheet.create({
   brandText: { color: colors.paper, fontSize: 20, fontFamily: fonts.bold, letterSpacing: 0.3 },
   navLink: { color: '#5eead4', fontSize: 15, fontFamily: fonts.semibold },
   tagline: { color: '#b9c4cc', fontSize: 13, fontFamily: fonts.regular },
-  accessory: { marginLeft: 'auto' },
+  accessory: { marginLeft: 'auto', flexShrink: 1, maxWidth: '100%' },
   content: { padding: space.lg, gap: space.lg, width: '100%', maxWidth: 1280, alignSelf: 'center' },
 });

@@ -1,9 +1,7 @@
 import { StyleSheet, Text, TextInput, View } from 'react-native';
-import { colors, fonts, radius, space } from '../../ui';
+import { colors, fonts, radius, space } from '../theme';
 
-export function NumberField({
-  label, unit, value, onChangeText, error, placeholder, testID,
-}: {
+interface FieldProps {
   label: string;
   unit: string;
   value: string;
@@ -11,7 +9,18 @@ export function NumberField({
   error?: string;
   placeholder?: string;
   testID: string;
-}) {
+  /** Words rather than a number (a description, a date). */
+  inputMode?: 'decimal' | 'text';
+  /** A short hint under the field. */
+  hint?: string;
+}
+
+/** A labelled field for free text: the same look as a number field, without the number keypad. */
+export function TextField(props: Omit<FieldProps, 'inputMode' | 'unit'> & { unit?: string }) {
+  return <NumberField {...props} unit={props.unit ?? ''} inputMode="text" />;
+}
+
+export function NumberField({ label, unit, value, onChangeText, error, placeholder, testID, inputMode = 'decimal', hint }: FieldProps) {
   return (
     // A long message gets the whole row rather than a tall sliver of text under a narrow box.
     <View style={[styles.field, error && error.length > 40 ? styles.fieldWide : null]}>
@@ -24,12 +33,13 @@ export function NumberField({
         onChangeText={onChangeText}
         placeholder={placeholder}
         placeholderTextColor={colors.gridStrong}
-        inputMode="decimal"
+        inputMode={inputMode}
         style={[styles.input, error ? styles.inputError : null]}
         accessibilityLabel={unit ? `${label} (${unit})` : label}
         aria-invalid={error ? true : undefined}
         testID={testID}
       />
+      {hint && !error ? <Text style={styles.hint}>{hint}</Text> : null}
       {error ? (
         <Text style={styles.error} testID={`${testID}-error`} accessibilityLiveRegion="polite">
           {error}
@@ -50,5 +60,6 @@ const styles = StyleSheet.create({
     fontVariant: ['tabular-nums'],
   },
   inputError: { borderColor: colors.warn },
+  hint: { fontFamily: fonts.regular, fontSize: 12, color: colors.inkSoft },
   error: { fontFamily: fonts.semibold, fontSize: 12, color: colors.warn },
 });

@@ -1,6 +1,6 @@
 import type { ReactNode } from 'react';
 import { StyleSheet, View } from 'react-native';
-import { space } from '../../ui';
+import { space } from '../theme';
 
 export function FieldGrid({ children }: { children: ReactNode }) {
   return <View style={styles.grid}>{children}</View>;

@@ -1,5 +1,5 @@
 import { Pressable, StyleSheet, Text, View } from 'react-native';
-import { colors, fonts, radius, space } from '../../ui';
+import { colors, fonts, radius, space } from '../theme';
 
 export function ChoiceToggle<T extends string>({
   label, options, value, onChange, testID,

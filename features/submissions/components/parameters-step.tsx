@@ -1,0 +1,96 @@
+import { useState } from 'react';
+import { StyleSheet, Text, TextInput, View } from 'react-native';
+import { parseParameterText, type ParameterLine } from '../../../shared/uploads/parameter-text';
+import { displayUnits, fillParameterFields, ParameterCompletion, toDisplay, type DisplayUnit, type NumberFields, type ParameterFields } from '../../tools';
+import { ActionButton, colors, FieldGrid, fonts, NumberField, radius, space } from '../../ui';
+
+export const LARGE_FIELDS: { key: 'x_bl' | 'x_c' | 'x_l' | 'bl0' | 'kms0'; label: string; unit: DisplayUnit; hint: string }[] = [
+  { key: 'x_bl', label: 'X at Bl 82 %', unit: 'mm', hint: 'one-way excursion where Bl falls to 82 % of rest' },
+  { key: 'x_c', label: 'X at compliance 75 %', unit: 'mm', hint: 'where compliance falls to 75 %' },
+  { key: 'x_l', label: 'X at Le ±10 %', unit: 'mm', hint: 'where inductance varies by 10 %' },
+  { key: 'bl0', label: 'Bl at rest', unit: 'tesla', hint: '' },
+  { key: 'kms0', label: 'Kms at rest', unit: 'nPerMm', hint: '' },
+];
+export type LargeKey = (typeof LARGE_FIELDS)[number]['key'];
+
+/** Step 4: small- and large-signal parameters, typed or pasted, checked live by the acoustics core. */
+export function ParametersStep({ small, large }: { small: ParameterFields; large: NumberFields<LargeKey> }) {
+  const [text, setText] = useState('');
+  const [lines, setLines] = useState<ParameterLine[] | null>(null);
+  const fill = () => {
+    const r = parseParameterText(text);
+    fillParameterFields(small, r.values);
+    for (const f of LARGE_FIELDS) {
+      const v = r.values[f.key];
+      if (v !== undefined) large.setText(f.key, toDisplay(v, f.unit, 6));
+    }
+    setLines(r.lines);
+  };
+  const taken = lines?.filter((l) => l.key && !l.error).length ?? 0;
+  const errors = lines?.filter((l) => l.error) ?? [];
+  return (
+    <View style={styles.gap} testID="submit-step-parameters">
+      <View style={styles.paste}>
+        <Text style={styles.label}>Paste parameters</Text>
+        <Text style={styles.meta}>One per line, e.g. &ldquo;Fs 82.4 Hz&rdquo;, &ldquo;Qts = 0,44&rdquo;, &ldquo;Vas: 1.9 L&rdquo;. Units are converted; a missing unit means the usual one.</Text>
+        <TextInput
+          value={text}
+          onChangeText={setText}
+          multiline
+          numberOfLines={6}
+          style={styles.textarea}
+          accessibilityLabel="Pasted parameters"
+          placeholder={'Fs 82.4 Hz\nRe 3.2 ohm\nQts 0.44'}
+          placeholderTextColor={colors.gridStrong}
+          testID="submit-paste"
+        />
+        <ActionButton label="Fill the fields" kind="secondary" onPress={fill} disabled={!text.trim()} testID="submit-paste-fill" />
+        {lines ? (
+          <View testID="submit-paste-report">
+            <Text style={styles.meta}>{taken} parameter{taken === 1 ? '' : 's'} taken.</Text>
+            {errors.map((l) => (
+              <Text key={l.line} style={styles.error}>
+                {l.error}
+              </Text>
+            ))}
+          </View>
+        ) : null}
+      </View>
+      <ParameterCompletion
+        fields={small}
+        testID="submit-ts"
+        title="Small signal"
+        lede="What you measured. The rest of the set, the figures and any disagreement between the values follow as you type."
+      />
+      <View style={styles.paste} testID="submit-large">
+        <Text style={styles.label}>Large signal</Text>
+        <FieldGrid>
+          {LARGE_FIELDS.map((f) => (
+            <NumberField
+              key={f.key}
+              label={f.label}
+              unit={displayUnits[f.unit].symbol}
+              value={large.text[f.key]}
+              onChangeText={(t) => large.setText(f.key, t)}
+              error={large.localErrors[f.key]}
+              hint={f.hint || undefined}
+              testID={`submit-large-${f.key}`}
+            />
+          ))}
+        </FieldGrid>
+      </View>
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  gap: { gap: space.md },
+  paste: { gap: space.sm, borderWidth: 1, borderColor: colors.rule, borderRadius: radius.md, padding: space.md, backgroundColor: colors.card },
+  label: { fontFamily: fonts.semibold, fontSize: 15, color: colors.ink },
+  meta: { fontFamily: fonts.regular, fontSize: 13, color: colors.inkSoft },
+  error: { fontFamily: fonts.semibold, fontSize: 13, color: colors.warn },
+  textarea: {
+    fontFamily: fonts.regular, fontSize: 14, color: colors.ink, backgroundColor: colors.paper, borderWidth: 1, borderColor: colors.rule,
+    borderRadius: radius.sm, padding: space.sm, minHeight: 110, textAlignVertical: 'top',
+  },
+});

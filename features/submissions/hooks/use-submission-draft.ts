@@ -1,0 +1,112 @@
+import { useCallback, useEffect, useReducer, useRef } from 'react';
+import { DEFAULT_MAX_BYTES, parseSummary } from '../../../shared/uploads';
+import { ApiRequestError } from '../../ui';
+import { uploadFile } from '../api/submissions-api';
+import { emptyDraft, fileMeta, guessFileMeta, type Draft, type DraftFile, type DriverChoice, type MethodText } from '../logic/draft';
+
+type Action =
+  | { type: 'driver'; driver: DriverChoice }
+  | { type: 'method'; patch: Partial<MethodText> }
+  | { type: 'add'; files: DraftFile[] }
+  | { type: 'file'; id: string; patch: Partial<DraftFile> }
+  | { type: 'remove'; id: string }
+  | { type: 'reset' };
+
+function reducer(state: Draft, a: Action): Draft {
+  switch (a.type) {
+    case 'driver':
+      return { ...state, driver: a.driver };
+    case 'method':
+      return { ...state, method: { ...state.method, ...a.patch } };
+    case 'add':
+      return { ...state, files: [...state.files, ...a.files] };
+    case 'file':
+      return { ...state, files: state.files.map((f) => (f.id === a.id ? { ...f, ...a.patch } : f)) };
+    case 'remove':
+      return { ...state, files: state.files.filter((f) => f.id !== a.id) };
+    case 'reset':
+      return emptyDraft();
+  }
+}
+
+const megabytes = (n: number) => `${(n / 1024 / 1024).toFixed(1)} MB`;
+
+/**
+ * The draft submission and the file reading behind it. Every file is read by the server as soon as
+ * it is added, and again whenever its kind, angle, level or settings change, so what the preview
+ * shows is always what the server understood.
+ */
+export function useSubmissionDraft() {
+  const [draft, dispatch] = useReducer(reducer, undefined, emptyDraft);
+  const blobs = useRef(new Map<string, Blob>());
+  const inFlight = useRef(new Map<string, string>());
+  const nextId = useRef(0);
+
+  const addFiles = useCallback((picked: { name: string; size: number; blob: Blob }[]) => {
+    const files: DraftFile[] = picked.map((p) => {
+      const id = `file-${++nextId.current}`;
+      blobs.current.set(id, p.blob);
+      const guess = guessFileMeta(p.name);
+      const tooBig = p.size > DEFAULT_MAX_BYTES;
+      return {
+        id, name: p.name, size: p.size, ...guess, settings: { columns: '', xUnit: 'auto', distortionUnit: 'auto' }, warnings: [], progress: 0,
+        status: tooBig ? 'failed' : 'reading',
+        ...(tooBig ? { error: { line: null, message: `${p.name}: ${megabytes(p.size)} is over the ${megabytes(DEFAULT_MAX_BYTES)} limit` }, readWith: 'too-big' } : {}),
+      };
+    });
+    dispatch({ type: 'add', files });
+  }, []);
+
+  // Reads any file whose description changed since it was last read.
+  useEffect(() => {
+    for (const f of draft.files) {
+      if (f.readWith === 'too-big') continue;
+      const m = fileMeta(f);
+      if ('error' in m) continue;
+      const key = JSON.stringify(m.meta);
+      if (f.readWith === key || inFlight.current.get(f.id) === key) continue;
+      const blob = blobs.current.get(f.id);
+      if (!blob) continue;
+      inFlight.current.set(f.id, key);
+      dispatch({ type: 'file', id: f.id, patch: { status: 'reading', progress: 0, error: undefined } });
+      uploadFile(blob, f.name, m.meta, (progress) => dispatch({ type: 'file', id: f.id, patch: { progress } }))
+        .then((r) => {
+          if (inFlight.current.get(f.id) !== key) return;
+          if (r.ok) {
+            const summary = parseSummary({ ok: true, points: r.points, settings: r.settings, warnings: r.warnings });
+            dispatch({ type: 'file', id: f.id, patch: { status: 'read', token: r.token, points: r.points, summary, warnings: r.warnings, readWith: key, progress: 1 } });
+          } else {
+            dispatch({ type: 'file', id: f.id, patch: { status: 'failed', token: undefined, points: undefined, error: { line: r.error.line, message: r.error.message }, readWith: key, progress: 1 } });
+          }
+        })
+        .catch((err: unknown) => {
+          if (inFlight.current.get(f.id) !== key) return;
+          const message = err instanceof ApiRequestError || err instanceof Error ? err.message : 'The file could not be sent';
+          dispatch({ type: 'file', id: f.id, patch: { status: 'failed', token: undefined, points: undefined, error: { line: null, message: `${f.name}: ${message}` }, readWith: key } });
+        })
+        .finally(() => {
+          if (inFlight.current.get(f.id) === key) inFlight.current.delete(f.id);
+        });
+    }
+  }, [draft.files]);
+
+  return {
+    draft,
+    setDriver: useCallback((driver: DriverChoice) => dispatch({ type: 'driver', driver }), []),
+    setMethod: useCallback((patch: Partial<MethodText>) => dispatch({ type: 'method', patch }), []),
+    addFiles,
+    updateFile: useCallback((id: string, patch: Partial<Pick<DraftFile, 'kind' | 'angle' | 'level' | 'settings'>>) => dispatch({ type: 'file', id, patch }), []),
+    removeFile: useCallback((id: string) => {
+      blobs.current.delete(id);
+      inFlight.current.delete(id);
+      dispatch({ type: 'remove', id });
+    }, []),
+    reset: useCallback(() => {
+      blobs.current.clear();
+      inFlight.current.clear();
+      dispatch({ type: 'reset' });
+    }, []),
+  };
+}
+
+export type SubmissionDraft = ReturnType<typeof useSubmissionDraft>;

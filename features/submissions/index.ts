@@ -1,0 +1,1 @@
+export { SubmitScreen } from './screens/submit-screen';
