@@ -77,6 +77,9 @@ describe('a reviewer submits measurements', () => {
     // Kind, angle and level were guessed from the names.
     await expect(row(files.spl[1]).getByRole('textbox', { name: /Angle/ }).inputValue()).resolves.toBe('30');
     await expect(row(files.thd[2]).getByRole('textbox', { name: /Drive level/ }).inputValue()).resolves.toBe('5.66');
+    // The top level's table also carries H2 and H3: one press reads those columns too.
+    await row(files.thd[2]).getByTestId(`submit-file-${files.thd[2].replace(/[^a-zA-Z0-9]+/g, '-')}-harmonics`).click();
+    for (const k of ['h2', 'h3']) await step.getByTestId(`submit-file-${files.thd[2].replace(/[^a-zA-Z0-9]+/g, '-')}-${k}-summary`).waitFor();
     await expect(row(files.impedance).getByTestId(`submit-file-${files.impedance.replace(/[^a-zA-Z0-9]+/g, '-')}-summary`).textContent()).resolves.toMatch(/decimal comma.*with phase/);
     const broken = row(files.broken);
     const error = broken.getByTestId(`submit-file-${files.broken.replace(/[^a-zA-Z0-9]+/g, '-')}-error`);
@@ -110,11 +113,13 @@ describe('a reviewer submits measurements', () => {
   it('previews every curve, submits, and finds the submission pending', async () => {
     await screen().getByTestId('submit-next').click();
     const step = screen().getByTestId('submit-step-preview');
-    await expect(step.getByTestId('submit-curve-count').textContent()).resolves.toBe('Curves: 3 SPL, 1 Impedance, 3 THD');
+    await expect(step.getByTestId('submit-curve-count').textContent()).resolves.toBe('Curves: 3 SPL, 1 Impedance, 3 THD, 1 H2, 1 H3');
     for (const chart of ['chart-spl', 'chart-impedance', 'chart-thd']) {
       expect(await chartInk(s.page, step.getByTestId(chart))).toBeGreaterThan(1500);
     }
     await expect(step.getByTestId('chart-spl-legend').textContent()).resolves.toMatch(/30°.*60°/);
+    await step.getByTestId('toggle-h2').click();
+    await expect(step.getByTestId('chart-thd-legend').textContent()).resolves.toMatch(/H2 5\.66 V/);
     await s.page.screenshot({ path: screenshotPath('submit-preview-wide'), fullPage: true });
     await s.page.setViewportSize({ width: 390, height: 844 });
     expect(await chartInk(s.page, step.getByTestId('chart-spl'))).toBeGreaterThan(800);
@@ -129,7 +134,7 @@ describe('a reviewer submits measurements', () => {
 
     const res = await s.page.request.get(`${baseUrl()}/api/submissions/mine`);
     const list = ((await res.json()) as { submissions: MySubmission[] }).submissions;
-    expect(list[0]).toMatchObject({ status: 'pending', model, makerName: 'Quillfield Audio', curveCount: 7 });
+    expect(list[0]).toMatchObject({ status: 'pending', model, makerName: 'Quillfield Audio', curveCount: 9 });
     // Pending work stays out of the public search.
     const search = await api<DriverListResponse>(`/api/drivers?q=${encodeURIComponent(`Quillfield ${model}`)}`);
     expect(search.items.map((d) => d.model)).not.toContain(model);

@@ -29,7 +29,14 @@ export function writeMeasurementFiles(dir: string): MeasurementFiles {
   });
   const impedance = 'mid3-impedance.csv';
   writeFileSync(join(dir, impedance), ['frequency;impedance;phase', ...f.map((x, i) => `${x.toFixed(2).replace('.', ',')};${r.impedance.magnitude[i].toFixed(4).replace('.', ',')};${r.impedance.phaseDeg[i].toFixed(2).replace('.', ',')}`)].join('\n'));
-  const thd = r.distortion.map((d) => {
+  // The top level comes as one table with the fundamental and the harmonics beside THD.
+  const thd = r.distortion.map((d, k) => {
+    if (k === r.distortion.length - 1) {
+      const name = `mid3-thd-${d.driveVoltage}V-harmonics.txt`;
+      const rows = f.map((x, i) => `${x.toFixed(2)}\t${r.spl[0].spl[i].toFixed(2)}\t${d.thdPercent[i].toPrecision(4)}\t${d.h2Percent[i].toPrecision(4)}\t${d.h3Percent[i].toPrecision(4)}`);
+      writeFileSync(join(dir, name), ['Freq [Hz]\tFund [dB]\tTHD [%]\tH2 [%]\tH3 [%]', ...rows].join('\n'));
+      return name;
+    }
     const name = `mid3-thd-${d.driveVoltage}V.csv`;
     writeFileSync(join(dir, name), ['Frequency [Hz],THD [%]', ...f.map((x, i) => `${x.toExponential(4)},${d.thdPercent[i].toPrecision(4)}`)].join('\n'));
     return name;

@@ -1,4 +1,4 @@
-import type { PhaseUnit, Separator, XUnit, YUnit } from './types';
+import type { CurveKind, PhaseUnit, Separator, XUnit, YUnit } from './types';
 import { lookUpUnit, type UnitToken } from './units';
 
 export interface HeaderColumn {
@@ -87,10 +87,31 @@ function describe(title: string): HeaderColumn {
   return { text: t, role, unit };
 }
 
-export function mapHeader(titles: string[]): HeaderMapping | null {
+// Words by which a column title names the curve of each kind. Exports that carry several values per
+// frequency (fundamental, THD, H2, H3) are common, so with more than one value column the one named
+// for the kind being read is taken.
+const KIND_WORDS: Record<CurveKind, RegExp> = {
+  spl: /spl|level|response|magnitude|mag\b|amplitude|pressure/,
+  impedance: /imp|^\|?z\|?$|^z\b|ohm|magnitude|mag\b/,
+  thd: /thd|total/,
+  h2: /h2|hd2|k2|2nd|second/,
+  h3: /h3|hd3|k3|3rd|third/,
+  imd: /imd|intermod/,
+  bl_x: /bl|force/,
+  kms_x: /kms|cms|stiff|compliance/,
+  le_x: /le\b|^le|induct/,
+};
+
+function nameOf(c: HeaderColumn): string {
+  return c.text.replace(/[([].*$/, '').trim().toLowerCase();
+}
+
+export function mapHeader(titles: string[], kind?: CurveKind): HeaderMapping | null {
   const cols = titles.map(describe);
   const x = cols.findIndex((c) => c.role === 'x');
-  const y = cols.findIndex((c) => c.role === 'y');
+  const values = cols.map((c, i) => (c.role === 'y' ? i : -1)).filter((i) => i >= 0);
+  const named = kind && values.length > 1 ? values.find((i) => KIND_WORDS[kind].test(nameOf(cols[i]))) : undefined;
+  const y = named ?? values[0] ?? -1;
   const phaseIndex = cols.findIndex((c) => c.role === 'phase');
   if (x < 0 || y < 0) return null;
   const xUnit = cols[x].unit?.kind === 'x' ? cols[x].unit.unit : null;

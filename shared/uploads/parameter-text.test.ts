@@ -276,13 +276,13 @@ describe('parseParameterText: names', () => {
       ['X_Bl 3.1 mm', 'x_bl', 0.0031],
       ['XBl 3.1', 'x_bl', 0.0031],
       ['Xbl (82%) 3.1 mm', 'x_bl', 0.0031],
-      ['X Bl @ Bl min=82%   3.1   mm', 'x_bl', 0.0031],
+      ['X Bl [Bl min 82 %]   3.1   mm', 'x_bl', 0.0031],
       ['X_C: 4.4 mm', 'x_c', 0.0044],
       ['XC 4.4', 'x_c', 0.0044],
-      ['X C @ C min=75%\t4.4\tmm', 'x_c', 0.0044],
+      ['X C (C min=75%)\t4.4\tmm', 'x_c', 0.0044],
       ['X_L = 5 mm', 'x_l', 0.005],
       ['XL 5', 'x_l', 0.005],
-      ['X L @ Z max=10% 5 mm', 'x_l', 0.005],
+      ['X L (10 %) 5 mm', 'x_l', 0.005],
       ['Bl(0) 3.95 T·m', 'bl0', 3.95],
       ['Bl(X=0) 3.95', 'bl0', 3.95],
       ['Bl at rest: 3.95 Tm', 'bl0', 3.95],
@@ -307,7 +307,7 @@ describe('parseParameterText: names', () => {
   it('rejects a large-signal limit quoted at another threshold than the one it is defined at', () => {
     // 82 %, 75 % and 10 % are the defaults of shared/acoustics/large-signal.ts.
     expect(only('Xbl (70%) 3.1 mm').error).toBe('line 1: X_Bl is defined where Bl(x) falls to 82 %, not 70 %');
-    expect(only('X C @ C min=50% 4 mm').error).toBe('line 1: X_C is defined where Cms(x) falls to 75 %, not 50 %');
+    expect(only('X C (C min=50%) 4 mm').error).toBe('line 1: X_C is defined where Cms(x) falls to 75 %, not 50 %');
     expect(only('X_L (20 %) 5').error).toBe('line 1: X_L is defined where Le(x) departs from Le(0) by 10 %, not 20 %');
   });
 
@@ -437,7 +437,7 @@ describe('parseParameterText properties', () => {
 
   it('never throws on 3,000 strings built from parameter-like pieces, and every error names its own line', () => {
     const pieces = [
-      'Fs', 'Qts', 'Le', 'Mms', 'Vas', 'Sd', 'Bl', 'Bl(0)', 'Kms0', 'X_Bl', 'Xbl (82%)', 'X C @ C min=75%', 'Driver', 'Parameter',
+      'Fs', 'Qts', 'Le', 'Mms', 'Vas', 'Sd', 'Bl', 'Bl(0)', 'Kms0', 'X_Bl', 'Xbl (82%)', 'X C (C min=75%)', 'Driver', 'Parameter',
       '82.4', '0,48', '1,150', '-3', '0', '1e999', '1.2e-3', '.5', 'NaN', 'Infinity',
       'Hz', 'kHz', 'mH', 'µH', 'Ω', 'cm²', 'm^2', 'ft³', 'L', 'N/mm', 'T·m', 'N/A', 'furlongs', 'constructor', '__proto__',
       ' ', '  ', '\t', ':', '=', ';', '|', '#', '//', '- ', '(', ')', '[', ']', '%', '@', '\n', '\r\n', '\r', '\uFEFF',

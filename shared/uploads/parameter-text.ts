@@ -146,11 +146,8 @@ const AMBIGUOUS_COMMA = /^[+\-\u2212]?[1-9]\d{0,2},\d{3}$/;
 const QUALIFIER_NUMBER = '(\\d+(?:[.,]\\d+)?)';
 // Every \s* follows a required token, so a long run of spaces cannot be split many ways.
 const QUALIFIER_WORDS = '(?:[a-z]+\\s*(?:(?:min|max)\\s*)?(?:[=:]\\s*)?)?';
-// "Xbl (82%)", "X_C [75 %]" or Klippel's "X Bl @ Bl min=82%".
-const QUALIFIER = new RegExp(
-  `^\\s*(?:[(\\[]\\s*${QUALIFIER_WORDS}${QUALIFIER_NUMBER}\\s*%\\s*[)\\]]|@\\s*${QUALIFIER_WORDS}${QUALIFIER_NUMBER}\\s*%)`,
-  'i',
-);
+// "Xbl (82%)", "X_C [75 %]" or "X Bl (Bl min=82%)".
+const QUALIFIER = new RegExp(`^\\s*[(\\[]\\s*${QUALIFIER_WORDS}${QUALIFIER_NUMBER}\\s*%\\s*[)\\]]`, 'i');
 // A unit in the name column, as exports write "Fs (Hz)" or "Vas [L]".
 const NAME_UNIT = /^\s*[([]([^()[\]]{0,24})[)\]]/;
 const SEPARATOR = /^[\s:=;]*/;
@@ -192,7 +189,7 @@ function matchName(body: string): NameMatch | null {
     if (SPECS[key].threshold) {
       const q = QUALIFIER.exec(rest);
       if (q) {
-        percent = q[1] ?? q[2];
+        percent = q[1];
         rest = rest.slice(q[0].length);
       }
     }

@@ -75,6 +75,17 @@ describe('fixtures', () => {
     expect(r.points.x).toHaveLength(41);
   });
 
+  it('takes the column named for the kind from a table with fundamental, THD, H2 and H3', () => {
+    // Reading the fundamental's dB column as THD would turn 86 dB into 2·10⁶ %; the titles decide.
+    const thd = ok(fixture('distortion-5col-header.txt', 'thd'));
+    const h2 = ok(fixture('distortion-5col-header.txt', 'h2'));
+    const h3 = ok(fixture('distortion-5col-header.txt', 'h3'));
+    expect([thd.settings.columns.y, h2.settings.columns.y, h3.settings.columns.y]).toEqual([2, 3, 4]);
+    expect(thd.points.y[0]).toBeCloseTo(0.3 + 2 / (1 + (100 / 150) ** 2), 4);
+    expect(h3.points.y[0]).toBeCloseTo(thd.points.y[0] * 0.55, 3);
+    expect(thd.settings.output.y).toBe('percent');
+  });
+
   it('rejects a non-numeric value at physical line 212', () => {
     const e = fail(fixture('broken-line-212.txt', 'impedance'));
     expect(e).toEqual({

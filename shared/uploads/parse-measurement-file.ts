@@ -177,6 +177,7 @@ interface Layout {
 }
 
 function chooseLayout(
+  kind: CurveKind,
   count: number,
   firstLine: number,
   headerIndex: number,
@@ -190,7 +191,7 @@ function chooseLayout(
   let headerText: string | null = null;
   if (headerIndex >= 0) {
     const titles = splitHeader(lines[headerIndex], count, separator);
-    mapping = titles ? mapHeader(titles) : null;
+    mapping = titles ? mapHeader(titles, kind) : null;
     if (mapping) {
       headerLine = headerIndex + 1;
       headerText = lines[headerIndex].trim();
@@ -329,7 +330,7 @@ function parseUnsafe(input: ParseInput, state: { line: number | null }): ParseRe
       }
       count = tokens.length;
       firstDataLine = lineNo;
-      layout = chooseLayout(count, lineNo, headerIndex, lines, separator, options, warnings);
+      layout = chooseLayout(input.kind, count, lineNo, headerIndex, lines, separator, options, warnings);
       xUnit = resolveXUnit(kind, layout, options, warnings);
       yUnit = resolveYUnit(kind, layout, options, warnings);
       phaseUnit = layout.headerPhaseUnit ?? 'deg';

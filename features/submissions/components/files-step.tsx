@@ -3,7 +3,7 @@ import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import { ActionButton, ChoiceToggle, colors, fonts, NumberField, radius, space, TextField } from '../../ui';
 import type { SubmissionDraft } from '../hooks/use-submission-draft';
-import { fileMeta, kindNeeds, UPLOAD_KINDS, type DraftFile, type FileSettings } from '../logic/draft';
+import { extraHarmonics, fileMeta, kindNeeds, UPLOAD_KINDS, type DraftFile, type FileSettings } from '../logic/draft';
 
 const X_UNITS = [{ value: 'auto', label: 'from the file' }, { value: 'Hz', label: 'Hz' }, { value: 'kHz', label: 'kHz' }, { value: 'mm', label: 'mm' }, { value: 'm', label: 'm' }] as const;
 const DIST_UNITS = [{ value: 'auto', label: 'from the file' }, { value: 'percent', label: '%' }, { value: 'db', label: 'dB re fundamental' }] as const;
@@ -17,11 +17,14 @@ function ProgressBar({ fraction, failed, testID }: { fraction: number; failed: b
   );
 }
 
-function FileRow({ file, onChange, onRemove }: { file: DraftFile; onChange: SubmissionDraft['updateFile']; onRemove: () => void }) {
+function FileRow({ file, all, draft }: { file: DraftFile; all: readonly DraftFile[]; draft: SubmissionDraft }) {
+  const onChange = draft.updateFile;
+  const onRemove = () => draft.removeFile(file.id);
+  const extra = extraHarmonics(file, all);
   const [open, setOpen] = useState(false);
   const needs = kindNeeds(file.kind);
   const meta = fileMeta(file);
-  const t = `submit-file-${file.name.replace(/[^a-zA-Z0-9]+/g, '-')}`;
+  const t = `submit-file-${file.name.replace(/[^a-zA-Z0-9]+/g, '-')}${file.copyOf ? `-${file.kind}` : ''}`;
   const setSettings = (patch: Partial<FileSettings>) => onChange(file.id, { settings: { ...file.settings, ...patch } });
   const distortion = ['thd', 'h2', 'h3', 'imd'].includes(file.kind);
   return (
@@ -29,6 +32,7 @@ function FileRow({ file, onChange, onRemove }: { file: DraftFile; onChange: Subm
       <View style={styles.rowHead}>
         <Text style={styles.name} numberOfLines={1}>
           {file.name}
+          {file.copyOf ? <Text style={styles.meta}> · {UPLOAD_KINDS.find((k) => k.value === file.kind)?.label} column</Text> : null}
         </Text>
         <Text style={styles.meta}>{(file.size / 1024).toFixed(1)} kB</Text>
         <ActionButton label="Remove" kind="quiet" onPress={onRemove} testID={`${t}-remove`} accessibilityLabel={`Remove ${file.name}`} />
@@ -81,6 +85,14 @@ function FileRow({ file, onChange, onRemove }: { file: DraftFile; onChange: Subm
           Read: {file.summary}
         </Text>
       ) : null}
+      {extra.length ? (
+        <ActionButton
+          label={`Also take ${extra.map((k) => k.toUpperCase()).join(' and ')} from this table`}
+          kind="secondary"
+          onPress={() => draft.addCopies(file.id, extra.map((kind) => ({ kind, level: file.level })))}
+          testID={`${t}-harmonics`}
+        />
+      ) : null}
       {file.status === 'read' && file.warnings.length > 0 ? file.warnings.map((w) => <Text key={w} style={styles.meta}>• {w}</Text>) : null}
       {file.status === 'failed' && file.error ? (
         <Text style={styles.error} testID={`${t}-error`} accessibilityLiveRegion="polite">
@@ -119,7 +131,7 @@ export function FilesStep({ draft }: { draft: SubmissionDraft }) {
       <ActionButton label={files.length ? 'Add more files' : 'Choose files'} onPress={choose} testID="submit-choose-files" />
       {pickError ? <Text style={styles.error}>{pickError}</Text> : null}
       {files.map((f) => (
-        <FileRow key={f.id} file={f} onChange={draft.updateFile} onRemove={() => draft.removeFile(f.id)} />
+        <FileRow key={f.id} file={f} all={files} draft={draft} />
       ))}
     </View>
   );

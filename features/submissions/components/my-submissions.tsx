@@ -17,9 +17,16 @@ export function MySubmissions() {
       {data && data.submissions.length === 0 ? <Text style={styles.meta}>None yet.</Text> : null}
       {data?.submissions.map((s) => (
         <View key={s.id} style={styles.item} testID={`my-submission-${s.id}`}>
-          <Link href={`/drivers/${s.driverSlug}`} style={styles.title}>
-            {s.makerName} {s.model}
-          </Link>
+          {/* Until approval the set is not on the driver's page, so only approved ones link there. */}
+          {s.status === 'approved' ? (
+            <Link href={`/drivers/${s.driverSlug}`} style={styles.title}>
+              {s.makerName} {s.model}
+            </Link>
+          ) : (
+            <Text style={styles.title}>
+              {s.makerName} {s.model}
+            </Text>
+          )}
           <Text style={[styles.status, s.status === 'pending' && styles.pending]}>{statusText[s.status] ?? s.status}</Text>
           <Text style={styles.meta}>
             {s.curveCount} curve{s.curveCount === 1 ? '' : 's'} · sent {new Date(s.createdAt).toLocaleDateString()}

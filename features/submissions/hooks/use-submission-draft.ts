@@ -41,6 +41,8 @@ export function useSubmissionDraft() {
   const blobs = useRef(new Map<string, Blob>());
   const inFlight = useRef(new Map<string, string>());
   const nextId = useRef(0);
+  const draftRef = useRef(draft);
+  draftRef.current = draft;
 
   const addFiles = useCallback((picked: { name: string; size: number; blob: Blob }[]) => {
     const files: DraftFile[] = picked.map((p) => {
@@ -74,7 +76,7 @@ export function useSubmissionDraft() {
           if (inFlight.current.get(f.id) !== key) return;
           if (r.ok) {
             const summary = parseSummary({ ok: true, points: r.points, settings: r.settings, warnings: r.warnings });
-            dispatch({ type: 'file', id: f.id, patch: { status: 'read', token: r.token, points: r.points, summary, warnings: r.warnings, readWith: key, progress: 1 } });
+            dispatch({ type: 'file', id: f.id, patch: { status: 'read', token: r.token, points: r.points, summary, warnings: r.warnings, header: r.settings.headerText, readWith: key, progress: 1 } });
           } else {
             dispatch({ type: 'file', id: f.id, patch: { status: 'failed', token: undefined, points: undefined, error: { line: r.error.line, message: r.error.message }, readWith: key, progress: 1 } });
           }
@@ -90,8 +92,22 @@ export function useSubmissionDraft() {
     }
   }, [draft.files]);
 
+  /** Reads the same file again as other kinds (the H2 and H3 columns of a THD table). */
+  const addCopies = useCallback((id: string, copies: Pick<DraftFile, 'kind' | 'level'>[]) => {
+    const blob = blobs.current.get(id);
+    const source = draftRef.current.files.find((f) => f.id === id);
+    if (!blob || !source) return;
+    const files: DraftFile[] = copies.map((c) => {
+      const copyId = `file-${++nextId.current}`;
+      blobs.current.set(copyId, blob);
+      return { id: copyId, copyOf: id, name: source.name, size: source.size, kind: c.kind, angle: '', level: c.level, settings: { ...source.settings, columns: '' }, warnings: [], progress: 0, status: 'reading' };
+    });
+    dispatch({ type: 'add', files });
+  }, []);
+
   return {
     draft,
+    addCopies,
     setDriver: useCallback((driver: DriverChoice) => dispatch({ type: 'driver', driver }), []),
     setMethod: useCallback((patch: Partial<MethodText>) => dispatch({ type: 'method', patch }), []),
     addFiles,

@@ -1,4 +1,4 @@
-import { buildSubmission, emptyDraft, fileMeta, fileProblems, guessFileMeta, methodBody, readNumber, splShiftDb, type Draft, type DraftFile } from './draft';
+import { buildSubmission, emptyDraft, extraHarmonics, fileMeta, fileProblems, guessFileMeta, methodBody, readNumber, splShiftDb, type Draft, type DraftFile } from './draft';
 
 const file = (over: Partial<DraftFile>): DraftFile => ({
   id: over.name ?? 'f',
@@ -117,4 +117,17 @@ it('refers 5.66 V at 0.5 m to 2.83 V / 1 m by −12.04 dB', () => {
   // 20·log10(2.83/5.66) = −6.02 dB (voltage ratio) and 20·log10(0.5/1) = −6.02 dB (inverse-distance
   // law): handbook relations, e.g. Davis & Patronis, Sound System Engineering, ch. 2 (from memory).
   expect(splShiftDb(5.66, 0.5)).toBeCloseTo(-12.041, 3);
+});
+
+describe('extraHarmonics', () => {
+  const table = file({ id: 't', kind: 'thd', level: '5.66', angle: '', header: 'Freq [Hz]\tFund [dB]\tTHD [%]\tH2 [%]\tH3 [%]' });
+  it('offers the H2 and H3 columns a THD table names', () => {
+    expect(extraHarmonics(table, [table])).toEqual(['h2', 'h3']);
+  });
+  it('offers only what is not yet taken at that level, and nothing for a two-column file', () => {
+    const h2 = file({ id: 'u', kind: 'h2', level: '5,66', angle: '' });
+    expect(extraHarmonics(table, [table, h2])).toEqual(['h3']);
+    const plain = { ...table, header: 'Frequency [Hz],THD [%]' };
+    expect(extraHarmonics(plain, [plain])).toEqual([]);
+  });
 });

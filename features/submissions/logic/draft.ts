@@ -50,6 +50,10 @@ export interface DraftFile {
   summary?: string;
   warnings: string[];
   error?: { line: number | null; message: string };
+  /** Set on a second reading of another file (its H2 or H3 columns): that file's id. */
+  copyOf?: string;
+  /** The column titles line the server found, if any, e.g. to offer the other columns of a table. */
+  header?: string | null;
   /** The meta the current result was read with; a change means the file must be read again. */
   readWith?: string;
 }
@@ -197,6 +201,18 @@ export function driverBody(d: DriverChoice): { ok: true; value: SubmissionInput[
   if (!(impedance !== undefined && impedance > 0 && impedance <= 100)) problems.push('Nominal impedance: ohms, above 0 and up to 100');
   if (problems.length) return { ok: false, problems };
   return { ok: true, value: { makerName: d.makerName.trim(), model: d.model.trim(), type: d.type, nominalSizeIn: size as number, nominalImpedanceOhm: impedance as number } };
+}
+
+/**
+ * Harmonic curves a THD file's header names but the draft does not take yet, so one table of
+ * fundamental, THD, H2 and H3 can give all three curves.
+ */
+export function extraHarmonics(file: DraftFile, all: readonly DraftFile[]): ('h2' | 'h3')[] {
+  if (file.kind !== 'thd' || file.status !== 'read' || !file.header) return [];
+  const h = file.header.toLowerCase();
+  const named = { h2: /\b(h2|hd2|k2|2nd)\b/.test(h), h3: /\b(h3|hd3|k3|3rd)\b/.test(h) };
+  const taken = (k: 'h2' | 'h3') => all.some((f) => f.kind === k && readNumber(f.level) === readNumber(file.level));
+  return (['h2', 'h3'] as const).filter((k) => named[k] && !taken(k));
 }
 
 export function fileProblems(files: readonly DraftFile[]): string[] {

@@ -17,6 +17,13 @@ import { MY_SUBMISSIONS_PATH } from '../hooks/use-my-submissions';
 import { useSubmissionDraft } from '../hooks/use-submission-draft';
 import { buildSubmission, driverBody, fileProblems, methodBody, type ParameterValues } from '../logic/draft';
 
+interface Sent {
+  driverSlug: string;
+  label: string;
+  /** Added to a driver already in the catalogue, whose page can be opened now. */
+  listed: boolean;
+}
+
 const STEPS = ['Driver', 'Method', 'Files', 'Parameters', 'Check and send'] as const;
 const largeSpec = Object.fromEntries(LARGE_FIELDS.map((f) => [f.key, { unit: f.unit }])) as FieldSpec<LargeKey>;
 
@@ -27,7 +34,7 @@ function storedSmall(values: Partial<Record<string, number>>): ParameterValues {
   return rest;
 }
 
-function SubmitForm({ onSent }: { onSent: (sent: { driverSlug: string; label: string }) => void }) {
+function SubmitForm({ onSent }: { onSent: (sent: Sent) => void }) {
   const [step, setStep] = useState(0);
   const d = useSubmissionDraft();
   const small = useParameterFields();
@@ -53,7 +60,7 @@ function SubmitForm({ onSent }: { onSent: (sent: { driverSlug: string; label: st
       const r = await sendSubmission(built.body);
       await mutate(MY_SUBMISSIONS_PATH);
       const label = d.draft.driver.mode === 'existing' ? d.draft.driver.label : `${d.draft.driver.makerName.trim()} ${d.draft.driver.model.trim()}`;
-      onSent({ driverSlug: r?.driverSlug ?? '', label });
+      onSent({ driverSlug: r?.driverSlug ?? '', label, listed: d.draft.driver.mode === 'existing' });
     } catch (err) {
       const fields = err instanceof ApiRequestError ? (err.details as { fields?: { field: string; message: string }[] } | undefined)?.fields : undefined;
       const where = fields?.map((f) => {
@@ -107,7 +114,7 @@ function SubmitForm({ onSent }: { onSent: (sent: { driverSlug: string; label: st
 export function SubmitScreen() {
   const wide = useBreakpoint() === 'wide';
   const [formKey, setFormKey] = useState(0);
-  const [sent, setSent] = useState<{ driverSlug: string; label: string } | null>(null);
+  const [sent, setSent] = useState<Sent | null>(null);
   return (
     <ScreenFrame testID="submit-screen">
       <Text style={styles.h1} accessibilityRole="header">
@@ -120,10 +127,10 @@ export function SubmitScreen() {
               <Card testID="submit-sent">
                 <Text style={styles.h2}>Sent for review</Text>
                 <Text style={styles.body}>
-                  Your measurements of {sent.label} are awaiting a moderator&apos;s approval.{' '}
-                  {sent.driverSlug ? (
+                  Your measurements of {sent.label} are awaiting a moderator&apos;s approval; they appear on the driver&apos;s page once approved.{' '}
+                  {sent.listed ? (
                     <Link href={`/drivers/${sent.driverSlug}`} style={styles.link}>
-                      Open the entry
+                      Open the listed entry
                     </Link>
                   ) : null}
                 </Text>
