@@ -14,6 +14,15 @@ export function createSubmissionsRepository(db: Knex) {
       });
     },
 
+    /** Staged files never submitted; a draft left for a day is abandoned, and its bytes go. */
+    async dropStaleUploads(userId: number, olderThanHours: number): Promise<number> {
+      return db('upload_files')
+        .where({ uploaded_by: userId })
+        .whereNull('set_id')
+        .where('created_at', '<', db.raw('NOW() - INTERVAL ? HOUR', [olderThanHours]))
+        .delete();
+    },
+
     async stagedUploads(trx: Knex.Transaction, tokens: string[], userId: number) {
       const rows = await trx('upload_files').whereIn('token', tokens).where({ uploaded_by: userId }).whereNull('set_id').forUpdate()
         .select('id', 'token', 'file_name as fileName', 'kind', 'angle_deg as angleDeg', 'drive_level_v as driveLevelV', 'bytes', 'parse_settings as settings');

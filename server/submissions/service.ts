@@ -11,6 +11,8 @@ import { ApiError } from '../http/api-error';
 import type { SubmissionsRepository } from './repository';
 
 const GRID = logFrequencyGrid();
+/** How long a read file waits for its submission before it is dropped. */
+export const STAGED_UPLOAD_HOURS = 24;
 const ACOUSTIC = new Set(['spl', 'impedance', 'thd', 'h2', 'h3', 'imd']);
 const UNITS: Record<string, string> = {
   fs: 'Hz', re: 'ohm', le: 'H', bl: 'T·m', mms: 'kg', mmd: 'kg', cms: 'm/N', kms: 'N/m', rms: 'kg/s', sd: 'm^2', vas: 'm^3', xmax: 'm',
@@ -29,6 +31,7 @@ export function createSubmissionsService(repo: SubmissionsRepository) {
       if (files.length !== meta.length) {
         throw new ApiError(400, errorCodes.validation, `meta describes ${meta.length} files but ${files.length} were sent`, { fields: [{ field: 'meta', message: 'one entry per file' }] });
       }
+      await repo.dropStaleUploads(user.id, STAGED_UPLOAD_HOURS);
       const out = [];
       for (const [i, f] of files.entries()) {
         const m = meta[i];

@@ -110,6 +110,18 @@ describe('reviewer submissions', () => {
     expect(await db('makers').where({ slug: `${P.toLowerCase()}-brand-new-maker` }).first()).toBeUndefined();
   });
 
+  it('drops the reviewer’s staged files left unsubmitted for a day when they upload again', async () => {
+    const first = await (await upload(reviewer, [{ name: 'spl-0deg-tab.txt', meta: { kind: 'spl', angleDeg: 0 } }])).json();
+    const old = first.files[0].token;
+    await db('upload_files').where({ token: old }).update({ created_at: db.raw('NOW() - INTERVAL 25 HOUR') });
+    const second = await (await upload(reviewer, [{ name: 'spl-0deg-tab.txt', meta: { kind: 'spl', angleDeg: 0 } }])).json();
+    expect(await db('upload_files').where({ token: old }).first()).toBeUndefined();
+    expect(await db('upload_files').where({ token: second.files[0].token }).first()).toBeDefined();
+    const sub = await submit({ driver: { makerName: `${P} Works`, model: 'Test 81', type: 'mid-range', nominalSizeIn: 3, nominalImpedanceOhm: 4 }, method, uploads: [old] });
+    expect(sub.status).toBe(400);
+    expect((await sub.json()).error.details.fields).toEqual([{ field: 'uploads.0', message: 'unknown upload' }]);
+  });
+
   it('rejects a bad submission body naming each field', async () => {
     const sub = await submit({ driver: { slug: 'Not A Slug' }, method: { ...method, distanceM: -1 }, uploads: [] });
     expect(sub.status).toBe(400);

@@ -144,7 +144,7 @@ const styles = StyleSheet.create({
   name: { fontFamily: fonts.semibold, fontSize: 14, color: colors.ink, flexShrink: 1 },
   inline: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'flex-end', gap: space.md },
   settings: { gap: space.sm },
-  short: { width: 150 },
+  short: { width: 150, flexDirection: 'row' },
   label: { fontFamily: fonts.semibold, fontSize: 13, color: colors.ink },
   meta: { fontFamily: fonts.regular, fontSize: 13, color: colors.inkSoft },
   ok: { fontFamily: fonts.regular, fontSize: 13, color: colors.accent },
