@@ -69,9 +69,9 @@ describe('a reviewer submits measurements', () => {
     const step = screen().getByTestId('submit-step-files');
     const chooser = s.page.waitForEvent('filechooser');
     await step.getByTestId('submit-choose-files').click();
-    await (await chooser).setFiles([...files.spl, files.impedance, ...files.thd, files.broken].map((n) => join(files.dir, n)));
+    await (await chooser).setFiles([...files.spl, files.impedance, ...files.thd, files.blx, files.broken].map((n) => join(files.dir, n)));
     const row = (name: string) => step.getByTestId(`submit-file-${name.replace(/[^a-zA-Z0-9]+/g, '-')}`);
-    for (const n of [...files.spl, files.impedance, ...files.thd]) {
+    for (const n of [...files.spl, files.impedance, ...files.thd, files.blx]) {
       await row(n).getByTestId(`submit-file-${n.replace(/[^a-zA-Z0-9]+/g, '-')}-summary`).waitFor();
     }
     // Kind, angle and level were guessed from the names.
@@ -103,6 +103,12 @@ describe('a reviewer submits measurements', () => {
     await report.getByText(/line 10/).waitFor();
     await expect(step.getByTestId('submit-ts-fs').inputValue()).resolves.toBe('95');
     await expect(step.getByTestId('submit-large-x_bl').inputValue()).resolves.toBe('2.1');
+    // The Bl(x) file gives its own limit; the typed 2.1 mm is checked against it and can be replaced.
+    const fromFiles = step.getByTestId('submit-large-from-files');
+    await expect(fromFiles.textContent()).resolves.toMatch(/X at Bl 82 % \d+(\.\d+)? mm.*Xmax .* set by Bl/);
+    await fromFiles.getByTestId('submit-large-use-files').click();
+    await expect(step.getByTestId('submit-large-x_bl').inputValue()).resolves.not.toBe('2.1');
+    await expect(step.getByTestId('submit-large-disagrees').count()).resolves.toBe(0);
     await step.getByTestId('submit-ts-warnings').waitFor();
     await step.getByTestId('submit-ts-result-vas').waitFor();
     // Vas = ρ·c²·Sd²·Cms with Cms = 1/((2π·Fs)²·Mms) (Small, JAES 1972): with ρ ≈ 1.2 kg/m³ and
@@ -113,8 +119,8 @@ describe('a reviewer submits measurements', () => {
   it('previews every curve, submits, and finds the submission pending', async () => {
     await screen().getByTestId('submit-next').click();
     const step = screen().getByTestId('submit-step-preview');
-    await expect(step.getByTestId('submit-curve-count').textContent()).resolves.toBe('Curves: 3 SPL, 1 Impedance, 3 THD, 1 H2, 1 H3');
-    for (const chart of ['chart-spl', 'chart-impedance', 'chart-thd']) {
+    await expect(step.getByTestId('submit-curve-count').textContent()).resolves.toBe('Curves: 3 SPL, 1 Impedance, 3 THD, 1 H2, 1 H3, 1 Bl(x)');
+    for (const chart of ['chart-spl', 'chart-impedance', 'chart-thd', 'chart-large-signal']) {
       expect(await chartInk(s.page, step.getByTestId(chart))).toBeGreaterThan(1500);
     }
     await expect(step.getByTestId('chart-spl-legend').textContent()).resolves.toMatch(/30°.*60°/);
@@ -134,7 +140,7 @@ describe('a reviewer submits measurements', () => {
 
     const res = await s.page.request.get(`${baseUrl()}/api/submissions/mine`);
     const list = ((await res.json()) as { submissions: MySubmission[] }).submissions;
-    expect(list[0]).toMatchObject({ status: 'pending', model, makerName: 'Quillfield Audio', curveCount: 9 });
+    expect(list[0]).toMatchObject({ status: 'pending', model, makerName: 'Quillfield Audio', curveCount: 10 });
     // Pending work stays out of the public search.
     const search = await api<DriverListResponse>(`/api/drivers?q=${encodeURIComponent(`Quillfield ${model}`)}`);
     expect(search.items.map((d) => d.model)).not.toContain(model);

@@ -12,6 +12,7 @@ export interface MeasurementFiles {
   impedance: string;
   thd: string[];
   broken: string;
+  blx: string;
 }
 
 export function writeMeasurementFiles(dir: string): MeasurementFiles {
@@ -43,5 +44,8 @@ export function writeMeasurementFiles(dir: string): MeasurementFiles {
   });
   const broken = 'mid3-broken.txt';
   writeFileSync(join(dir, broken), ['# hand-edited export', ...f.map((x, i) => (i === 40 ? `${x.toFixed(2)}\tabc` : `${x.toFixed(2)}\t${r.spl[0].spl[i].toFixed(2)}`))].join('\n'));
-  return { dir, spl, impedance, thd, broken };
+  const blx = 'mid3-bl(x).csv';
+  const ls = r.largeSignal;
+  writeFileSync(join(dir, blx), ['"x [mm]","Bl [T·m]"', ...ls.x.map((x, i) => `${(x * 1000).toFixed(3)},${ls.bl[i].toFixed(4)}`)].join('\n'));
+  return { dir, spl, impedance, thd, broken, blx };
 }

@@ -1,7 +1,9 @@
-import { useState } from 'react';
+import { useMemo, useState } from 'react';
 import { StyleSheet, Text, TextInput, View } from 'react-native';
 import { parseParameterText, type ParameterLine } from '../../../shared/uploads/parameter-text';
 import { displayUnits, fillParameterFields, ParameterCompletion, toDisplay, type DisplayUnit, type NumberFields, type ParameterFields } from '../../tools';
+import type { DraftFile } from '../logic/draft';
+import { disagreements, limitsFromFiles } from '../logic/large-signal-from-files';
 import { ActionButton, colors, FieldGrid, fonts, NumberField, radius, space } from '../../ui';
 
 export const LARGE_FIELDS: { key: 'x_bl' | 'x_c' | 'x_l' | 'bl0' | 'kms0'; label: string; unit: DisplayUnit; hint: string }[] = [
@@ -14,8 +16,14 @@ export const LARGE_FIELDS: { key: 'x_bl' | 'x_c' | 'x_l' | 'bl0' | 'kms0'; label
 export type LargeKey = (typeof LARGE_FIELDS)[number]['key'];
 
 /** Step 4: small- and large-signal parameters, typed or pasted, checked live by the acoustics core. */
-export function ParametersStep({ small, large }: { small: ParameterFields; large: NumberFields<LargeKey> }) {
+export function ParametersStep({ small, large, files }: { small: ParameterFields; large: NumberFields<LargeKey>; files: readonly DraftFile[] }) {
   const [text, setText] = useState('');
+  const fromFiles = useMemo(() => limitsFromFiles(files), [files]);
+  const found = LARGE_FIELDS.filter((f) => fromFiles.values[f.key] !== undefined);
+  const off = disagreements(large.values, fromFiles.values);
+  const useFileValues = () => {
+    for (const f of found) large.setText(f.key, toDisplay(fromFiles.values[f.key] as number, f.unit, 4));
+  };
   const [lines, setLines] = useState<ParameterLine[] | null>(null);
   const fill = () => {
     const r = parseParameterText(text);
@@ -64,6 +72,28 @@ export function ParametersStep({ small, large }: { small: ParameterFields; large
       />
       <View style={styles.paste} testID="submit-large">
         <Text style={styles.label}>Large signal</Text>
+        {found.length ? (
+          <View style={styles.derived} testID="submit-large-from-files">
+            <Text style={styles.meta}>
+              From your curve files (thresholds 82 % Bl, 75 % compliance, ±10 % Le):{' '}
+              {found.map((f) => `${f.label} ${toDisplay(fromFiles.values[f.key] as number, f.unit)} ${displayUnits[f.unit].symbol}`).join(' · ')}
+              {fromFiles.xmax ? ` · Xmax ${toDisplay(fromFiles.xmax.value, 'mm')} mm, set by ${fromFiles.xmax.governedBy}` : ''}
+            </Text>
+            <ActionButton label="Use these" kind="secondary" onPress={useFileValues} testID="submit-large-use-files" />
+          </View>
+        ) : (
+          <Text style={styles.meta}>Add Bl(x), Kms(x) or Le(x) files and the limits they give appear here.</Text>
+        )}
+        {fromFiles.notes.map((n) => (
+          <Text key={n} style={styles.meta}>
+            {n}
+          </Text>
+        ))}
+        {off.map((m) => (
+          <Text key={m} style={styles.error} testID="submit-large-disagrees">
+            {m}
+          </Text>
+        ))}
         <FieldGrid>
           {LARGE_FIELDS.map((f) => (
             <NumberField
@@ -88,6 +118,7 @@ const styles = StyleSheet.create({
   paste: { gap: space.sm, borderWidth: 1, borderColor: colors.rule, borderRadius: radius.md, padding: space.md, backgroundColor: colors.card },
   label: { fontFamily: fonts.semibold, fontSize: 15, color: colors.ink },
   meta: { fontFamily: fonts.regular, fontSize: 13, color: colors.inkSoft },
+  derived: { gap: space.sm, borderLeftWidth: 3, borderLeftColor: colors.accent, paddingLeft: space.sm },
   error: { fontFamily: fonts.semibold, fontSize: 13, color: colors.warn },
   textarea: {
     fontFamily: fonts.regular, fontSize: 14, color: colors.ink, backgroundColor: colors.paper, borderWidth: 1, borderColor: colors.rule,

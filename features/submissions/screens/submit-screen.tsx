@@ -87,7 +87,7 @@ function SubmitForm({ onSent }: { onSent: (sent: Sent) => void }) {
           <FilesStep draft={d} />
         </View>
         <View style={step === 3 ? null : styles.hidden}>
-          <ParametersStep small={small} large={large} />
+          <ParametersStep small={small} large={large} files={d.draft.files} />
         </View>
         {step === 4 ? (
           <PreviewStep draft={d.draft} parameterCount={Object.keys(smallValues).length + Object.keys(large.values).length} problems={problems} sending={sending} sendError={sendError} onSend={send} />
