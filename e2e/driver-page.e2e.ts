@@ -57,17 +57,23 @@ describe.each(viewports)('driver page at $name size ($width x $height)', ({ name
 
   const screen = () => s.page.getByTestId('driver-screen');
 
-  it('draws all four charts with a legend', async () => {
+  it('draws every chart, impedance phase under magnitude, with a legend', async () => {
     const d = picks.main;
     await s.page.goto(`${baseUrl()}/drivers/${d.slug}`);
     await screen().getByRole('heading', { name: d.model }).waitFor();
-    for (const id of ['chart-spl', 'chart-impedance', 'chart-thd', 'chart-large-signal']) {
+    for (const id of ['chart-spl', 'chart-impedance', 'chart-impedance-phase', 'chart-thd', 'chart-large-signal']) {
       const chart = screen().getByTestId(id);
       await chart.scrollIntoViewIfNeeded();
       const ink = await inkOf(s, chart);
       expect({ id, drawn: ink > 1500 }).toEqual({ id, drawn: true });
     }
     await expect(screen().getByTestId('chart-spl-legend').textContent()).resolves.toContain('On axis');
+    // The phase chart sits right under the magnitude, the same width, with the same two lines.
+    await expect(screen().getByTestId('chart-impedance-phase-legend').textContent()).resolves.toBe('MeasuredFitted model');
+    const mag = await screen().getByTestId('chart-impedance').locator('canvas').boundingBox();
+    const phase = await screen().getByTestId('chart-impedance-phase').locator('canvas').boundingBox();
+    expect(phase && mag && { x: phase.x, width: phase.width, below: phase.y > mag.y + mag.height }).toEqual({ x: mag?.x, width: mag?.width, below: true });
+    await screen().getByTestId('chart-impedance-phase').screenshot({ path: screenshotPath(`driver-page-${name}-phase`) });
     // Harmonics join the distortion chart's legend when toggled on.
     await screen().getByTestId('toggle-h2').click();
     await screen().getByTestId('chart-thd-legend').getByText(/^H2 /).first().waitFor();

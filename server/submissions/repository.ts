@@ -99,6 +99,26 @@ export function createSubmissionsRepository(db: Knex) {
       }));
     },
 
+    async setForRenormalise(trx: Knex.Transaction, setId: number): Promise<{ driveVoltageV: number; distanceM: number } | null> {
+      const row = await trx('measurement_sets').where({ id: setId }).forUpdate().first('drive_voltage_v as driveVoltageV', 'distance_m as distanceM');
+      return row ? { driveVoltageV: Number(row.driveVoltageV), distanceM: Number(row.distanceM) } : null;
+    },
+
+    async originalsOfSet(trx: Knex.Transaction, setId: number) {
+      const rows = await trx('upload_files').where({ set_id: setId }).orderBy('id')
+        .select('file_name as fileName', 'kind', 'angle_deg as angleDeg', 'drive_level_v as driveLevelV', 'bytes', 'parse_settings as settings');
+      return rows.map((r: Record<string, unknown>) => ({ ...r, settings: typeof r.settings === 'string' ? JSON.parse(r.settings) : r.settings })) as {
+        fileName: string; kind: string; angleDeg: number | null; driveLevelV: number | null; bytes: Buffer; settings: { options?: object };
+      }[];
+    },
+
+    /** Swaps a set's curves for freshly normalised ones; the fitted impedance model is derived, not an original, so it stays. */
+    async replaceCurves(trx: Knex.Transaction, setId: number, curves: { kind: string; angleDeg: number | null; driveLevelV: number | null; x: number[]; y: number[]; phase: number[] | null }[], normalisation: unknown): Promise<void> {
+      await trx('curves').where({ set_id: setId }).whereNot({ kind: 'impedance_fit' }).delete();
+      for (const c of curves) await this.insertCurve(trx, setId, c);
+      await trx('measurement_sets').where({ id: setId }).update({ normalisation: JSON.stringify(normalisation) });
+    },
+
     async mine(userId: number): Promise<MySubmission[]> {
       return db('measurement_sets as s')
         .join('drivers as d', 'd.id', 's.driver_id')

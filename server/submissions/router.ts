@@ -1,6 +1,7 @@
 import { Router } from 'express';
 import type { Knex } from 'knex';
 import multer from 'multer';
+import { z } from 'zod';
 import { errorCodes } from '../../shared/api/errors';
 import { nearDuplicateQuerySchema, submissionSchema, uploadMetaSchema } from '../../shared/schemas/submissions';
 import type { User } from '../../shared/schemas/users';
@@ -9,6 +10,7 @@ import { currentUser, requireRole } from '../http/require-role';
 import { createSubmissionsRepository } from './repository';
 import { createSubmissionsService } from './service';
 
+const setIdParams = z.object({ id: z.coerce.number().int().positive() });
 const MAX_FILE_BYTES = 5 * 1024 * 1024;
 const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: MAX_FILE_BYTES, files: 40 } });
 
@@ -37,6 +39,10 @@ export function createSubmissionsRouter(db: Knex): Router {
   router.post('/submissions', reviewer, async (req, res) => {
     const input = parseOr400(submissionSchema, req.body ?? {}, 'body');
     res.status(201).json(await service.submit(currentUser(req) as User, input));
+  });
+  router.post('/submissions/:id/renormalise', requireRole('moderator'), async (req, res) => {
+    const { id } = parseOr400(setIdParams, req.params, 'params');
+    res.json(await service.renormalise(id));
   });
   router.get('/submissions/mine', reviewer, async (req, res) => {
     res.json({ submissions: await service.mine(currentUser(req) as User) });

@@ -1,5 +1,6 @@
 import { randomBytes } from 'node:crypto';
 import { interpolateLog, logFrequencyGrid } from '../../shared/acoustics/curves';
+import { normaliseSpl } from '../../shared/acoustics/levels';
 import { errorCodes } from '../../shared/api/errors';
 import { findNearDuplicates } from '../../shared/catalogue/near-duplicates';
 import type { NearDuplicateQuery, NearDuplicatesResponse, UploadMeta } from '../../shared/schemas/submissions';
@@ -7,7 +8,7 @@ import type { submissionSchema } from '../../shared/schemas/submissions';
 import type { User } from '../../shared/schemas/users';
 import { parseMeasurementFile, type ParseResult } from '../../shared/uploads';
 import type { z } from 'zod';
-import { ApiError } from '../http/api-error';
+import { ApiError, notFound } from '../http/api-error';
 import type { SubmissionsRepository } from './repository';
 
 const GRID = logFrequencyGrid();
@@ -22,6 +23,42 @@ const UNITS: Record<string, string> = {
 export interface UploadedFile {
   originalname: string;
   buffer: Buffer;
+}
+
+/** What submit does to every curve of a set measured at `driveVoltageV` and `distanceM`, and its record. */
+export function normalisationPlan(driveVoltageV: number, distanceM: number) {
+  // SPL at V volts and d metres to 2.83 V / 1 m: +20·log10(2.83/V) for drive, +20·log10(d/1 m) for inverse distance.
+  const splShift = normaliseSpl(0, { drive: { voltage: driveVoltageV }, distance: distanceM });
+  return {
+    splShift,
+    record: {
+      grid: '1/48 octave, 10 Hz to 40 kHz (acoustic curves; no extrapolation)',
+      reference: '2.83 V / 1 m',
+      steps: [`SPL shifted ${splShift >= 0 ? '+' : ''}${splShift.toFixed(2)} dB from ${driveVoltageV} V at ${distanceM} m`, 'distortion converted to percent of the fundamental', 'large-signal x in metres'],
+    },
+  };
+}
+
+type StoredUpload = { fileName: string; kind: string; angleDeg: number | null; driveLevelV: number | null; bytes: Buffer; settings: { options?: object } };
+type NormalisedCurve = { kind: string; angleDeg: number | null; driveLevelV: number | null; x: number[]; y: number[]; phase: number[] | null };
+
+/** Reads one stored original with its saved settings and puts it on the common grid. */
+export function normaliseUpload(u: StoredUpload, splShift: number): NormalisedCurve | { error: string } {
+  const parsed = parseMeasurementFile({ name: u.fileName, bytes: new Uint8Array(u.bytes), kind: u.kind as never, options: u.settings.options });
+  if (!parsed.ok) return { error: parsed.error.message };
+  const p = parsed.points;
+  if (!ACOUSTIC.has(u.kind)) return { kind: u.kind, angleDeg: null, driveLevelV: null, x: p.x, y: p.y, phase: p.phase };
+  const x: number[] = [];
+  const y: number[] = [];
+  const ph: number[] = [];
+  for (const f of GRID) {
+    const v = interpolateLog(p.x, p.y, f);
+    if (v === null) continue;
+    x.push(Number(f.toPrecision(6)));
+    y.push(Number((u.kind === 'spl' ? v + splShift : v).toPrecision(6)));
+    if (p.phase) ph.push(Number((interpolateLog(p.x, p.phase, f) as number).toFixed(2)));
+  }
+  return { kind: u.kind, angleDeg: u.kind === 'spl' ? (u.angleDeg ?? 0) : u.angleDeg, driveLevelV: u.driveLevelV, x, y, phase: p.phase ? ph : null };
 }
 
 export function createSubmissionsService(repo: SubmissionsRepository) {
@@ -62,35 +99,14 @@ export function createSubmissionsService(repo: SubmissionsRepository) {
             });
           }
           const { driveVoltageV, distanceM } = input.method;
-          // SPL at V volts and d metres to 2.83 V / 1 m: +20·log10(2.83/V) for drive, +20·log10(d/1 m) for inverse distance.
-          const splShift = 20 * Math.log10(2.83 / driveVoltageV) + 20 * Math.log10(distanceM);
-          const normalisation = {
-            grid: '1/48 octave, 10 Hz to 40 kHz (acoustic curves; no extrapolation)',
-            reference: '2.83 V / 1 m',
-            steps: [`SPL shifted ${splShift >= 0 ? '+' : ''}${splShift.toFixed(2)} dB from ${driveVoltageV} V at ${distanceM} m`, 'distortion converted to percent of the fundamental', 'large-signal x in metres'],
-          };
+          const plan = normalisationPlan(driveVoltageV, distanceM);
           const anglesDeg = [...new Set(staged.filter((u) => u.kind === 'spl').map((u) => u.angleDeg ?? 0))];
-          const created = await repo.createPendingSet(trx, { driver: input.driver, userId: user.id, method: { ...input.method, reviewer: user.displayName }, anglesDeg, normalisation });
+          const created = await repo.createPendingSet(trx, { driver: input.driver, userId: user.id, method: { ...input.method, reviewer: user.displayName }, anglesDeg, normalisation: plan.record });
           // Each original is read again from its stored bytes, so what lands is exactly what can be re-run.
           for (const u of staged) {
-            const parsed = parseMeasurementFile({ name: u.fileName, bytes: new Uint8Array(u.bytes), kind: u.kind as never, options: u.settings.options });
-            if (!parsed.ok) throw new ApiError(400, errorCodes.validation, parsed.error.message, { fields: [{ field: `uploads.${input.uploads.indexOf(u.token)}`, message: parsed.error.message }] });
-            const p = parsed.points;
-            if (!ACOUSTIC.has(u.kind)) {
-              await repo.insertCurve(trx, created.setId, { kind: u.kind, angleDeg: null, driveLevelV: null, x: p.x, y: p.y, phase: p.phase });
-              continue;
-            }
-            const x: number[] = [];
-            const y: number[] = [];
-            const ph: number[] = [];
-            for (const f of GRID) {
-              const v = interpolateLog(p.x, p.y, f);
-              if (v === null) continue;
-              x.push(Number(f.toPrecision(6)));
-              y.push(Number((u.kind === 'spl' ? v + splShift : v).toPrecision(6)));
-              if (p.phase) ph.push(Number((interpolateLog(p.x, p.phase, f) as number).toFixed(2)));
-            }
-            await repo.insertCurve(trx, created.setId, { kind: u.kind, angleDeg: u.kind === 'spl' ? (u.angleDeg ?? 0) : u.angleDeg, driveLevelV: u.driveLevelV, x, y, phase: p.phase ? ph : null });
+            const curve = normaliseUpload(u, plan.splShift);
+            if ('error' in curve) throw new ApiError(400, errorCodes.validation, curve.error, { fields: [{ field: `uploads.${input.uploads.indexOf(u.token)}`, message: curve.error }] });
+            await repo.insertCurve(trx, created.setId, curve);
           }
           const parameters = input.parameters.map((p) => ({ name: p.name, value: p.value, unit: UNITS[p.name] ?? '', signal: p.signal }));
           await repo.finishSet(trx, created.setId, parameters, staged.map((s) => s.id));
@@ -106,6 +122,28 @@ export function createSubmissionsService(repo: SubmissionsRepository) {
     },
 
     mine: (user: User) => repo.mine(user.id),
+
+    /**
+     * Reads a set's kept originals again with their saved settings and replaces its curves, for a
+     * moderator after the reader or the grid changes. All or nothing, like the submission itself.
+     */
+    async renormalise(setId: number) {
+      return repo.transaction(async (trx) => {
+        const set = await repo.setForRenormalise(trx, setId);
+        if (!set) throw notFound(`Measurement set ${setId}`);
+        const originals = await repo.originalsOfSet(trx, setId);
+        if (originals.length === 0) throw new ApiError(409, errorCodes.conflict, `Set ${setId} has no kept originals to read again`);
+        const plan = normalisationPlan(set.driveVoltageV, set.distanceM);
+        const curves = [];
+        for (const u of originals) {
+          const curve = normaliseUpload(u, plan.splShift);
+          if ('error' in curve) throw new ApiError(400, errorCodes.validation, curve.error, { fields: [{ field: u.fileName, message: curve.error }] });
+          curves.push(curve);
+        }
+        await repo.replaceCurves(trx, setId, curves, plan.record);
+        return { setId, curves: curves.length, normalisation: plan.record };
+      });
+    },
 
     /** Entries that may already be the driver a reviewer is about to create, strongest first. */
     async nearDuplicates(input: NearDuplicateQuery): Promise<NearDuplicatesResponse> {

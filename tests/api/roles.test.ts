@@ -1,4 +1,6 @@
-import { createTestDb } from '../support/test-db';
+import { readFileSync } from 'node:fs';
+import { join } from 'node:path';
+import { createTestDb, removePrefixed } from '../support/test-db';
 import { cleanupFixture, insertFixtureCatalogue } from '../support/fixtures';
 import { signIn, startTestServer } from '../support/sign-in';
 
@@ -12,6 +14,8 @@ describe('roles and sessions', () => {
   const cookies: Partial<Record<Role, string>> = {};
   let targetId = 0;
   let driverSlug = '';
+  let submittedSetId = 0;
+  const splFile = readFileSync(join(__dirname, '..', 'fixtures', 'uploads', 'spl-0deg-tab.txt'));
 
   beforeAll(async () => {
     await db('users').where('login', 'like', `${P}-%`).delete();
@@ -24,26 +28,45 @@ describe('roles and sessions', () => {
     }
     await signIn(server.url, `${P}-target`);
     targetId = (await db('users').where({ login: `${P}-target` }).first('id')).id;
+    const sent = await call('POST', '/api/submissions', 'reviewer', await submissionBody('reviewer', 'Matrix set'));
+    submittedSetId = (await sent.json()).setId;
   });
   afterAll(async () => {
     await server.close();
     await db('saved_overlays').where('title', 'like', `${P}%`).delete();
     await db('users').where('login', 'like', `${P}-%`).delete();
     await cleanupFixture(db, P);
+    await removePrefixed(db, P);
     await db.destroy();
   });
 
+  const cookieOf = (role: Role): Record<string, string> => (cookies[role] ? { cookie: cookies[role] as string } : {});
   const call = (method: string, path: string, role: Role, body?: unknown, origin = server.url) =>
     fetch(`${server.url}${path}`, {
       method,
       redirect: 'manual',
-      headers: { 'content-type': 'application/json', origin, ...(cookies[role] ? { cookie: cookies[role] as string } : {}) },
+      headers: { 'content-type': 'application/json', origin, ...cookieOf(role) },
       body: body === undefined ? undefined : JSON.stringify(body),
     });
+  const uploadForm = () => {
+    const form = new FormData();
+    form.append('files', new Blob([splFile]), 'spl-0deg-tab.txt');
+    form.append('meta', JSON.stringify([{ kind: 'spl', angleDeg: 0 }]));
+    return form;
+  };
+  const upload = (role: Role, origin = server.url) =>
+    fetch(`${server.url}/api/uploads/parse`, { method: 'POST', redirect: 'manual', body: uploadForm(), headers: { origin, ...cookieOf(role) } });
+  /** A valid submission for roles that may stage files; others get a well-formed body they are refused before reading. */
+  const submissionBody = async (role: Role, model = `Matrix ${role}`) => {
+    const res = roles.indexOf(role) >= roles.indexOf('reviewer') ? await upload(role) : null;
+    const token = res ? (await res.json()).files[0].token : 'a'.repeat(32);
+    return { driver: { makerName: `${P} Matrix Works`, model, type: 'mid-range', nominalSizeIn: 3, nominalImpedanceOhm: 4 }, method: { driveVoltageV: 2.83, distanceM: 1, baffle: 'matrix baffle' }, uploads: [token] };
+  };
 
   // Every state-changing route with the status each role must get. Expectations follow the role
   // model: members save links, admins hand out roles, anyone may use the calculators.
-  const matrix: { name: string; method: string; path: () => string; body: () => unknown; expect: Record<Role, number> }[] = [
+  type Route = { name: string; method: string; path: () => string; body: (role: Role) => unknown; expect: Record<Role, number>; send?: (role: Role, origin: string) => Promise<Response> };
+  const matrix: Route[] = [
     {
       name: 'save a comparison link', method: 'POST', path: () => '/api/overlays', body: () => ({ title: `${P} link`, entries: [{ slug: driverSlug }] }),
       expect: { visitor: 401, member: 201, reviewer: 201, moderator: 201, admin: 201 },
@@ -56,18 +79,30 @@ describe('roles and sessions', () => {
       name: 'run a calculator', method: 'POST', path: () => '/api/calc/piston', body: () => ({ diameter: 0.1 }),
       expect: { visitor: 200, member: 200, reviewer: 200, moderator: 200, admin: 200 },
     },
+    {
+      name: 'read an uploaded file', method: 'POST', path: () => '/api/uploads/parse', body: () => undefined, send: (role, origin) => upload(role, origin),
+      expect: { visitor: 401, member: 403, reviewer: 200, moderator: 200, admin: 200 },
+    },
+    {
+      name: 'send a submission', method: 'POST', path: () => '/api/submissions', body: (role) => submissionBody(role),
+      expect: { visitor: 401, member: 403, reviewer: 201, moderator: 201, admin: 201 },
+    },
+    {
+      name: 'read a set again from its originals', method: 'POST', path: () => `/api/submissions/${submittedSetId}/renormalise`, body: () => undefined,
+      expect: { visitor: 401, member: 403, reviewer: 403, moderator: 200, admin: 200 },
+    },
   ];
 
   for (const route of matrix) {
     for (const role of roles) {
       it(`${route.name} as ${role} → ${route.expect[role]}`, async () => {
-        const res = await call(route.method, route.path(), role, route.body());
+        const res = route.send ? await route.send(role, server.url) : await call(route.method, route.path(), role, await route.body(role));
         expect(res.status).toBe(route.expect[role]);
         if (res.status >= 400) expect((await res.json()).error.code).toMatch(/unauthenticated|forbidden/);
       });
     }
     it(`${route.name} from a forged cross-site page → 403`, async () => {
-      const res = await call(route.method, route.path(), 'admin', route.body(), 'http://attacker.example');
+      const res = route.send ? await route.send('admin', 'http://attacker.example') : await call(route.method, route.path(), 'admin', await route.body('admin'), 'http://attacker.example');
       expect(res.status).toBe(403);
       expect((await res.json()).error.code).toBe('forbidden');
     });

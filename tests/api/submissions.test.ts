@@ -12,6 +12,8 @@ describe('reviewer submissions', () => {
   let server: Awaited<ReturnType<typeof startTestServer>>;
   let reviewer = '';
   let member = '';
+  let moderator = '';
+  let landedSetId = 0;
 
   const cleanup = () => removePrefixed(db, P);
 
@@ -20,7 +22,9 @@ describe('reviewer submissions', () => {
     server = await startTestServer(db);
     reviewer = (await signIn(server.url, `${P}-reviewer`)).cookie;
     member = (await signIn(server.url, `${P}-member`)).cookie;
+    moderator = (await signIn(server.url, `${P}-moderator`)).cookie;
     await db('users').where({ login: `${P}-reviewer` }).update({ role: 'reviewer' });
+    await db('users').where({ login: `${P}-moderator` }).update({ role: 'moderator' });
   });
   afterAll(async () => {
     await server.close();
@@ -71,6 +75,7 @@ describe('reviewer submissions', () => {
     const sub = await submit({ driver: { makerName: `${P} Works`, model: 'Test 80', type: 'mid-range', nominalSizeIn: 3, nominalImpedanceOhm: 4 }, method, uploads: files.map((f: { token: string }) => f.token), parameters: [{ name: 'fs', value: 101 }] });
     expect(sub.status).toBe(201);
     const { setId } = await sub.json();
+    landedSetId = setId;
     const set = await db('measurement_sets').where({ id: setId }).first();
     expect(set.status).toBe('pending');
     const spl = await db('curves').where({ set_id: setId, kind: 'spl' }).first();
@@ -92,6 +97,25 @@ describe('reviewer submissions', () => {
     // Pending work is not in the public catalogue until a moderator approves it.
     const search = await (await fetch(`${server.url}/api/drivers?q=${encodeURIComponent(`${P} Works Test 80`)}`)).json();
     expect(search.items.map((d: { model: string }) => d.model)).not.toContain('Test 80');
+  });
+
+  it('lets a moderator read a set’s kept originals again and get the same curves back', async () => {
+    const renormalise = (id: number, cookie: string) => fetch(`${server.url}/api/submissions/${id}/renormalise`, { method: 'POST', headers: { cookie, origin: server.url } });
+    const curvesOf = async () => (await db('curves').where({ set_id: landedSetId }).orderBy('kind').select('kind', 'x_values', 'y_values', 'phase_values'))
+      .map((c: Record<string, unknown>) => ({ ...c, x_values: String(c.x_values), y_values: String(c.y_values), phase_values: c.phase_values === null ? null : String(c.phase_values) }));
+    const before = await curvesOf();
+    await db('curves').where({ set_id: landedSetId, kind: 'spl' }).update({ y_values: JSON.stringify([0]) });
+    expect((await renormalise(landedSetId, reviewer)).status).toBe(403);
+    const res = await renormalise(landedSetId, moderator);
+    expect(res.status).toBe(200);
+    expect(await res.json()).toMatchObject({ setId: landedSetId, curves: 2, normalisation: { reference: '2.83 V / 1 m' } });
+    expect(await curvesOf()).toEqual(before);
+    expect((await renormalise(2_000_000_000, moderator)).status).toBe(404);
+    // A set loaded by the demo seed has no originals to read.
+    const demoSet = await db('measurement_sets').whereNull('submitted_by').first('id');
+    const none = await renormalise(demoSet.id, moderator);
+    expect(none.status).toBe(409);
+    expect((await none.json()).error.message).toMatch(/no kept originals/);
   });
 
   it('leaves no rows behind when a submission fails part-way', async () => {

@@ -3,11 +3,13 @@ import { StyleSheet, View } from 'react-native';
 import type { MeasurementSet } from '../../../shared/schemas/drivers';
 import { LogChart, logYDomain } from '../../charts';
 import { colors, space, ToggleChip } from '../../ui';
-import { distortionSeries, excursionDomain, frequencyDomain, impedanceSeries, largeSignalSeries, setOverlaySeries, splDomain, splSeries } from '../logic/driver-series';
+import {
+  distortionSeries, excursionDomain, frequencyDomain, impedancePhaseSeries, impedanceSeries, largeSignalSeries, phaseDomain, setOverlaySeries, splDomain, splSeries,
+} from '../logic/driver-series';
 
 const palette = colors.series;
 
-/** The four measurement charts for one set, plus every set's on-axis response when there are several. */
+/** The measurement charts for one set (impedance as magnitude over phase), plus every set's on-axis response when there are several. */
 export function DriverCharts({ set, sets }: { set: MeasurementSet | undefined; sets: readonly MeasurementSet[] }) {
   const [harmonics, setHarmonics] = useState({ h2: false, h3: false });
   const spl = useMemo(() => splSeries(set, palette), [set]);
@@ -18,7 +20,10 @@ export function DriverCharts({ set, sets }: { set: MeasurementSet | undefined; s
   const splX = useMemo(() => frequencyDomain(spl), [spl]);
   const splY = useMemo(() => splDomain(spl), [spl]);
   const overlayY = useMemo(() => splDomain(overlay), [overlay]);
-  const zX = useMemo(() => frequencyDomain(z), [z]);
+  const phase = useMemo(() => impedancePhaseSeries(set, palette), [set]);
+  // Magnitude and phase share one frequency axis, so a resonance lines up across the two.
+  const zX = useMemo(() => frequencyDomain([...z, ...phase]), [z, phase]);
+  const phaseY = useMemo(() => phaseDomain(phase), [phase]);
   const thdX = useMemo(() => frequencyDomain(thd), [thd]);
   // Past 100 % the fundamental is lost in its harmonics; the axis stops there and clips the rest.
   const thdY = useMemo((): [number, number] => {
@@ -33,7 +38,10 @@ export function DriverCharts({ set, sets }: { set: MeasurementSet | undefined; s
       {sets.length > 1 ? (
         <LogChart testID="chart-sets" title="On-axis response of every measurement set" series={overlay} xDomain={frequencyDomain(overlay)} yDomain={overlayY} yUnit="dB SPL" yStep={5} legend height={220} />
       ) : null}
-      <LogChart testID="chart-impedance" title="Impedance magnitude, measured and fitted model" series={z} xDomain={zX} yUnit="Ω" yStep={z.length && Math.max(...z.flatMap((s) => s.y)) > 40 ? 10 : 5} legend emptyText="No impedance measured." />
+      <View style={styles.pair}>
+        <LogChart testID="chart-impedance" title="Impedance magnitude, measured and fitted model" series={z} xDomain={zX} yUnit="Ω" yStep={z.length && Math.max(...z.flatMap((s) => s.y)) > 40 ? 10 : 5} legend emptyText="No impedance measured." />
+        <LogChart testID="chart-impedance-phase" title="Impedance phase" series={phase} xDomain={zX} yDomain={phaseY} yStep={30} yUnit="degrees" height={170} legend emptyText="No impedance phase measured." />
+      </View>
       <View style={styles.chartWithToggles}>
         <View style={styles.toggles}>
           <ToggleChip label="H2" selected={harmonics.h2} onPress={() => setHarmonics((h) => ({ ...h, h2: !h.h2 }))} testID="toggle-h2" />
@@ -59,6 +67,7 @@ export function DriverCharts({ set, sets }: { set: MeasurementSet | undefined; s
 
 const styles = StyleSheet.create({
   charts: { gap: space.md },
+  pair: { gap: space.xs },
   chartWithToggles: { gap: space.xs },
   toggles: { flexDirection: 'row', gap: space.xs, justifyContent: 'flex-end' },
 });

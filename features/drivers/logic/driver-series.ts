@@ -40,15 +40,51 @@ export function setOverlaySeries(sets: readonly MeasurementSet[], palette: Palet
   });
 }
 
+// Measured impedance is solid, the fitted model dashed, in the same colours on magnitude and phase.
+const measuredStyle = (palette: Palette) => ({ label: 'Measured', width: 2.5, ...seriesStyle(0, palette) });
+const fitStyle = (palette: Palette) => ({ label: 'Fitted model', width: 2, color: palette[1 % palette.length], dash: [8, 4] as readonly number[] });
+
 /** Measured magnitude against the fitted model's. */
 export function impedanceSeries(set: MeasurementSet | undefined, palette: Palette): ChartSeries[] {
   if (!set) return [];
   const out: ChartSeries[] = [];
   const measured = set.curves.find((c) => c.kind === 'impedance');
   const fit = set.curves.find((c) => c.kind === 'impedance_fit');
-  if (measured) out.push({ id: 'z-measured', x: measured.x, y: measured.y, label: 'Measured', width: 2.5, ...seriesStyle(0, palette) });
-  if (fit) out.push({ id: 'z-fit', x: fit.x, y: fit.y, label: 'Fitted model', width: 2, color: palette[1 % palette.length], dash: [8, 4] });
+  if (measured) out.push({ id: 'z-measured', x: measured.x, y: measured.y, ...measuredStyle(palette) });
+  if (fit) out.push({ id: 'z-fit', x: fit.x, y: fit.y, ...fitStyle(palette) });
   return out;
+}
+
+/** A curve's phase against its frequencies, or null when it has none. Extra points on either side are dropped. */
+function phaseOf(c: Curve | undefined): { x: readonly number[]; y: readonly number[] } | null {
+  if (!c?.phase?.length || c.x.length === 0) return null;
+  const n = Math.min(c.x.length, c.phase.length);
+  return n === c.x.length && n === c.phase.length ? { x: c.x, y: c.phase } : { x: c.x.slice(0, n), y: c.phase.slice(0, n) };
+}
+
+/** Measured impedance phase (degrees) against the fitted model's; a curve without phase gives no series. */
+export function impedancePhaseSeries(set: MeasurementSet | undefined, palette: Palette): ChartSeries[] {
+  if (!set) return [];
+  const out: ChartSeries[] = [];
+  const measured = phaseOf(set.curves.find((c) => c.kind === 'impedance'));
+  const fit = phaseOf(set.curves.find((c) => c.kind === 'impedance_fit'));
+  if (measured) out.push({ id: 'phase-measured', ...measured, ...measuredStyle(palette) });
+  if (fit) out.push({ id: 'phase-fit', ...fit, ...fitStyle(palette) });
+  return out;
+}
+
+/**
+ * The phase axis in degrees: −90..90 (the whole range of a passive load's impedance), widened in
+ * 30° steps, up to ±180, for any point outside it (noise, a wrapped measurement).
+ */
+export function phaseDomain(series: readonly ChartSeries[], step = 30): [number, number] {
+  let lo = -90;
+  let hi = 90;
+  for (const s of series) for (const v of s.y) if (Number.isFinite(v)) {
+    lo = Math.min(lo, v);
+    hi = Math.max(hi, v);
+  }
+  return [Math.max(-180, Math.floor(lo / step) * step), Math.min(180, Math.ceil(hi / step) * step)];
 }
 
 export function driveLevels(set: MeasurementSet | undefined): number[] {
