@@ -12,7 +12,17 @@ import { createSubmissionsService } from './service';
 
 const setIdParams = z.object({ id: z.coerce.number().int().positive() });
 const MAX_FILE_BYTES = 5 * 1024 * 1024;
-const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: MAX_FILE_BYTES, files: 40 } });
+type UploadRequest = Express.Request & { uploadingName?: string };
+const upload = multer({
+  storage: multer.memoryStorage(),
+  limits: { fileSize: MAX_FILE_BYTES, files: 40 },
+  // Multer's size error does not say which file it was; files arrive one after another, so the
+  // last one started is the one that ran over.
+  fileFilter: (req, file, cb) => {
+    (req as UploadRequest).uploadingName = file.originalname;
+    cb(null, true);
+  },
+});
 
 export function createSubmissionsRouter(db: Knex): Router {
   const service = createSubmissionsService(createSubmissionsRepository(db));
@@ -22,7 +32,10 @@ export function createSubmissionsRouter(db: Knex): Router {
     upload.array('files', 40)(req, res, (err: unknown) => {
       if (!err) return next();
       const e = err as { code?: string; field?: string; message?: string };
-      if (e.code === 'LIMIT_FILE_SIZE') return next(new ApiError(400, errorCodes.validation, `A file is over the ${MAX_FILE_BYTES / 1024 / 1024} MB limit`, { fields: [{ field: 'files', message: 'file too large' }] }));
+      if (e.code === 'LIMIT_FILE_SIZE') {
+        const name = (req as UploadRequest).uploadingName ?? 'A file';
+        return next(new ApiError(400, errorCodes.validation, `"${name}" is over the ${MAX_FILE_BYTES / 1024 / 1024} MB limit`, { fields: [{ field: 'files', message: `${name}: file too large` }] }));
+      }
       next(new ApiError(400, errorCodes.badRequest, `Upload could not be read: ${e.message ?? 'unknown error'}`));
     });
   }, async (req, res) => {

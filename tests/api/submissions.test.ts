@@ -57,6 +57,19 @@ describe('reviewer submissions', () => {
     expect(res.status).toBe(403);
   });
 
+  it('refuses a file over the size limit, naming it, and stages nothing from that request', async () => {
+    const form = new FormData();
+    form.append('files', new Blob([readFileSync(join(fixtures, 'spl-0deg-tab.txt'))]), 'small.txt');
+    form.append('files', new Blob([new Uint8Array(5 * 1024 * 1024 + 1).fill(0x31)]), 'huge-sweep.txt');
+    form.append('meta', JSON.stringify([{ kind: 'spl', angleDeg: 0 }, { kind: 'spl', angleDeg: 30 }]));
+    const before = Number((await db('upload_files').whereIn('uploaded_by', db('users').select('id').where({ login: `${P}-reviewer` })).count({ n: '*' }).first())?.n);
+    const res = await fetch(`${server.url}/api/uploads/parse`, { method: 'POST', body: form, headers: { cookie: reviewer, origin: server.url } });
+    expect(res.status).toBe(400);
+    expect((await res.json()).error.message).toBe('"huge-sweep.txt" is over the 5 MB limit');
+    const after = Number((await db('upload_files').whereIn('uploaded_by', db('users').select('id').where({ login: `${P}-reviewer` })).count({ n: '*' }).first())?.n);
+    expect(after).toBe(before);
+  });
+
   it('parses each file on its own and names the line of a broken one', async () => {
     const res = await upload(reviewer, [
       { name: 'spl-0deg-tab.txt', meta: { kind: 'spl', angleDeg: 0 } },

@@ -84,7 +84,7 @@ export function useSubmissionDraft() {
         .catch((err: unknown) => {
           if (inFlight.current.get(f.id) !== key) return;
           const message = err instanceof ApiRequestError || err instanceof Error ? err.message : 'The file could not be sent';
-          dispatch({ type: 'file', id: f.id, patch: { status: 'failed', token: undefined, points: undefined, error: { line: null, message: `${f.name}: ${message}` }, readWith: key } });
+          dispatch({ type: 'file', id: f.id, patch: { status: 'failed', token: undefined, points: undefined, error: { line: null, message: message.includes(f.name) ? message : `${f.name}: ${message}` }, readWith: key } });
         })
         .finally(() => {
           if (inFlight.current.get(f.id) === key) inFlight.current.delete(f.id);
