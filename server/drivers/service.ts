@@ -1,8 +1,8 @@
 import { computeDerivedFigures } from '../../shared/catalogue/derived-figures';
-import type { DriverDetail, DriverListQuery, DriverListResponse } from '../../shared/schemas/drivers';
+import type { DriverDetail, DriverIdentity, DriverListQuery, DriverListResponse } from '../../shared/schemas/drivers';
 import { availabilitySchema, referenceBandFor } from '../../shared/schemas/drivers';
 import { notFound } from '../http/api-error';
-import type { DriversRepository } from './repository';
+import type { DriverRow, DriversRepository } from './repository';
 import { SearchIndex } from './search-index';
 
 export interface DriversServiceOptions {
@@ -11,6 +11,19 @@ export interface DriversServiceOptions {
 }
 
 const toMm = (m: number | null) => (m === null ? null : Math.round(m * 10000) / 10);
+
+/** A driver's naming fields, in the order both the driver page and the overlay send them. */
+export function driverIdentity(row: DriverRow, requestedSlug: string): DriverIdentity {
+  return {
+    slug: row.slug,
+    requestedSlug,
+    model: row.model,
+    maker: { slug: row.makerSlug, name: row.makerName },
+    type: row.type,
+    nominalSizeIn: row.nominalSizeIn,
+    nominalImpedanceOhm: row.nominalImpedanceOhm,
+  };
+}
 
 
 export function createDriversService(repo: DriversRepository, options: DriversServiceOptions = {}) {
@@ -88,13 +101,7 @@ export function createDriversService(repo: DriversRepository, options: DriversSe
       const spread = spreadOf(measurementSets.map((s) => s.parameters));
       const availability = availabilitySchema.safeParse(row.availability);
       return {
-        slug: row.slug,
-        requestedSlug: slug,
-        model: row.model,
-        maker: { slug: row.makerSlug, name: row.makerName },
-        type: row.type,
-        nominalSizeIn: row.nominalSizeIn,
-        nominalImpedanceOhm: row.nominalImpedanceOhm,
+        ...driverIdentity(row, slug),
         fsHz: p('fs'),
         qts: p('qts'),
         vasL: p('vas') === null ? null : (p('vas') as number) * 1000,

@@ -8,6 +8,7 @@ import type { OverlayDriver, OverlayQuery, OverlayResponse, SavedOverlay } from 
 import { overlayOptionsSchema, type saveOverlaySchema } from '../../shared/schemas/overlay';
 import type { z } from 'zod';
 import type { DriversRepository } from '../drivers/repository';
+import { driverIdentity } from '../drivers/service';
 import { ApiError, notFound } from '../http/api-error';
 import type { OverlayRepository } from './repository';
 
@@ -57,13 +58,7 @@ export function createOverlayService(drivers: DriversRepository, repo: OverlayRe
     const levels = [...new Set(cs.filter((c) => c.kind === 'thd').map((c) => c.driveLevelV ?? 0))].sort((a, b) => a - b);
     const ref = (s: (typeof sets)[number]) => ({ id: s.id, label: s.label, reviewer: s.reviewer, sampleId: s.sampleId, burnIn: s.burnIn });
     return {
-      slug: row.slug,
-      requestedSlug: slug,
-      model: row.model,
-      maker: { slug: row.makerSlug, name: row.makerName },
-      type: row.type,
-      nominalSizeIn: row.nominalSizeIn,
-      nominalImpedanceOhm: row.nominalImpedanceOhm,
+      ...driverIdentity(row, slug),
       sets: sets.map(ref),
       set: { ...ref(set), driveVoltageV: set.driveVoltageV, distanceM: set.distanceM, baffle: set.baffle, gating: set.gating, temperatureC: set.temperatureC, measuredOn: set.measuredOn },
       spl: cs.filter((c) => c.kind === 'spl').sort((a, b) => (a.angleDeg ?? 0) - (b.angleDeg ?? 0)).map((c) => ({ angleDeg: c.angleDeg ?? 0, y: onGrid(c) })),

@@ -238,6 +238,18 @@ export const driverDetailSchema = driverSummarySchema.extend({
 });
 export type DriverDetail = z.infer<typeof driverDetailSchema>;
 
+/** The fields that name a driver, first in both the driver page and each overlay driver. */
+export const driverIdentitySchema = driverDetailSchema.pick({
+  slug: true,
+  requestedSlug: true,
+  model: true,
+  maker: true,
+  type: true,
+  nominalSizeIn: true,
+  nominalImpedanceOhm: true,
+});
+export type DriverIdentity = z.infer<typeof driverIdentitySchema>;
+
 export const driverDetailQuerySchema = z
   .object({
     bandLo: z.coerce.number().finite().min(10).max(40000).optional(),

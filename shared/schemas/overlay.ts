@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { burnInSchema, derivedFiguresSchema, driverTypeSchema, makerSchema, parameterSchema } from './drivers';
+import { derivedFiguresSchema, driverIdentitySchema, measurementSetSchema, parameterSchema } from './drivers';
 
 export const MAX_STACK = 4;
 
@@ -33,32 +33,13 @@ export const overlayQuerySchema = z
   .strict();
 export type OverlayQuery = z.infer<typeof overlayQuerySchema>;
 
-export const overlaySetRefSchema = z.object({
-  id: z.number().int(),
-  label: z.string(),
-  reviewer: z.string(),
-  sampleId: z.string().nullable(),
-  burnIn: burnInSchema,
-});
+export const overlaySetRefSchema = measurementSetSchema.pick({ id: true, label: true, reviewer: true, sampleId: true, burnIn: true });
 
 /** Curves are sent on the response's shared grid: one y array per curve, no x arrays. */
-export const overlayDriverSchema = z.object({
-  slug: z.string(),
-  requestedSlug: z.string(),
-  model: z.string(),
-  maker: makerSchema,
-  type: driverTypeSchema,
-  nominalSizeIn: z.number(),
-  nominalImpedanceOhm: z.number(),
+export const overlayDriverSchema = driverIdentitySchema.extend({
   sets: z.array(overlaySetRefSchema),
-  set: overlaySetRefSchema.extend({
-    driveVoltageV: z.number(),
-    distanceM: z.number(),
-    baffle: z.string(),
-    gating: z.string().nullable(),
-    temperatureC: z.number().nullable(),
-    measuredOn: z.string().nullable(),
-  }),
+  /** The set shown: its conditions without its data, which follows on the grid. */
+  set: measurementSetSchema.omit({ anglesDeg: true, parameters: true, curves: true }),
   spl: z.array(z.object({ angleDeg: z.number(), y: z.array(z.number().nullable()) })),
   impedance: z.object({ magnitude: z.array(z.number().nullable()), phaseDeg: z.array(z.number().nullable()).nullable() }).nullable(),
   thd: z.array(z.object({ driveLevelV: z.number(), thd: z.array(z.number().nullable()), h2: z.array(z.number().nullable()).nullable(), h3: z.array(z.number().nullable()).nullable() })),

@@ -110,42 +110,33 @@ export function outputUnits(kind: CurveKind): { x: 'Hz' | 'm'; y: 'dB' | 'ohm' |
 
 export type UnitToken = { kind: 'x'; unit: XUnit } | { kind: 'y'; unit: YUnit } | { kind: 'phase'; unit: PhaseUnit };
 
-const UNIT_TOKENS: Record<string, UnitToken> = {
-  hz: { kind: 'x', unit: 'Hz' },
-  khz: { kind: 'x', unit: 'kHz' },
-  mm: { kind: 'x', unit: 'mm' },
-  m: { kind: 'x', unit: 'm' },
-  db: { kind: 'y', unit: 'dB' },
-  dbspl: { kind: 'y', unit: 'dB' },
-  'db spl': { kind: 'y', unit: 'dB' },
-  dbr: { kind: 'y', unit: 'dB_rel' },
-  'db rel': { kind: 'y', unit: 'dB_rel' },
-  dbc: { kind: 'y', unit: 'dB_rel' },
-  '%': { kind: 'y', unit: 'percent' },
-  percent: { kind: 'y', unit: 'percent' },
-  ohm: { kind: 'y', unit: 'ohm' },
-  ohms: { kind: 'y', unit: 'ohm' },
-  '\u03a9': { kind: 'y', unit: 'ohm' },
-  '\u2126': { kind: 'y', unit: 'ohm' },
-  tm: { kind: 'y', unit: 'T·m' },
-  't·m': { kind: 'y', unit: 'T·m' },
-  't*m': { kind: 'y', unit: 'T·m' },
-  't.m': { kind: 'y', unit: 'T·m' },
-  'n/m': { kind: 'y', unit: 'N/m' },
-  'n/mm': { kind: 'y', unit: 'N/mm' },
-  h: { kind: 'y', unit: 'H' },
-  mh: { kind: 'y', unit: 'mH' },
-  uh: { kind: 'y', unit: 'µH' },
-  '\u00b5h': { kind: 'y', unit: 'µH' },
-  '\u03bch': { kind: 'y', unit: 'µH' },
-  deg: { kind: 'phase', unit: 'deg' },
-  degree: { kind: 'phase', unit: 'deg' },
-  degrees: { kind: 'phase', unit: 'deg' },
-  '\u00b0': { kind: 'phase', unit: 'deg' },
-  rad: { kind: 'phase', unit: 'rad' },
-};
+const xToken = (unit: XUnit): UnitToken => ({ kind: 'x', unit });
+const yToken = (unit: YUnit): UnitToken => ({ kind: 'y', unit });
+const phaseToken = (unit: PhaseUnit): UnitToken => ({ kind: 'phase', unit });
+
+// Each unit with every spelling a header may give it, lower case with single spaces.
+const UNIT_SPELLINGS: [UnitToken, ...string[]][] = [
+  [xToken('Hz'), 'hz'],
+  [xToken('kHz'), 'khz'],
+  [xToken('mm'), 'mm'],
+  [xToken('m'), 'm'],
+  [yToken('dB'), 'db', 'dbspl', 'db spl'],
+  [yToken('dB_rel'), 'dbr', 'db rel', 'dbc'],
+  [yToken('percent'), '%', 'percent'],
+  [yToken('ohm'), 'ohm', 'ohms', '\u03a9', '\u2126'],
+  [yToken('T·m'), 'tm', 't·m', 't*m', 't.m'],
+  [yToken('N/m'), 'n/m'],
+  [yToken('N/mm'), 'n/mm'],
+  [yToken('H'), 'h'],
+  [yToken('mH'), 'mh'],
+  [yToken('µH'), 'uh', '\u00b5h', '\u03bch'],
+  [phaseToken('deg'), 'deg', 'degree', 'degrees', '\u00b0'],
+  [phaseToken('rad'), 'rad'],
+];
+
+const UNIT_TOKENS = new Map(UNIT_SPELLINGS.flatMap(([token, ...spellings]) => spellings.map((s) => [s, token] as const)));
 
 export function lookUpUnit(text: string): UnitToken | null {
   const key = text.trim().toLowerCase().replace(/\s+/g, ' ');
-  return Object.prototype.hasOwnProperty.call(UNIT_TOKENS, key) ? UNIT_TOKENS[key] : null;
+  return UNIT_TOKENS.get(key) ?? null;
 }

@@ -5,59 +5,76 @@ interface Display {
   scale: number;
   digits: number;
 }
+type Unit = Omit<Display, 'label'>;
+
+const unit = (symbol: string, scale: number, digits: number): Unit => ({ unit: symbol, scale, digits });
+const hz = unit('Hz', 1, 1);
+const plain = unit('', 1, 2);
+const ohm = unit('Ω', 1, 2);
+const mH = unit('mH', 1e3, 3);
+const tesla = unit('T·m', 1, 2);
+const gram = unit('g', 1e3, 2);
+const mmPerN = unit('mm/N', 1e3, 3);
+const nPerMm = unit('N/mm', 1e-3, 2);
+const cm2 = unit('cm²', 1e4, 1);
+const litre = unit('L', 1e3, 2);
+const mm = unit('mm', 1e3, 2);
+const watt = unit('W', 1, 0);
+
+const as = (label: string, u: Unit): Display => ({ label, ...u });
 
 const display: Record<string, Display> = {
-  fs: { label: 'Fs', unit: 'Hz', scale: 1, digits: 1 },
-  qms: { label: 'Qms', unit: '', scale: 1, digits: 2 },
-  qes: { label: 'Qes', unit: '', scale: 1, digits: 2 },
-  qts: { label: 'Qts', unit: '', scale: 1, digits: 2 },
-  re: { label: 'Re', unit: 'Ω', scale: 1, digits: 2 },
-  le: { label: 'Le', unit: 'mH', scale: 1e3, digits: 3 },
-  bl: { label: 'Bl', unit: 'T·m', scale: 1, digits: 2 },
-  mms: { label: 'Mms', unit: 'g', scale: 1e3, digits: 2 },
-  mmd: { label: 'Mmd', unit: 'g', scale: 1e3, digits: 2 },
-  cms: { label: 'Cms', unit: 'mm/N', scale: 1e3, digits: 3 },
-  kms: { label: 'Kms', unit: 'N/mm', scale: 1e-3, digits: 2 },
-  rms: { label: 'Rms', unit: 'kg/s', scale: 1, digits: 2 },
-  sd: { label: 'Sd', unit: 'cm²', scale: 1e4, digits: 1 },
-  vas: { label: 'Vas', unit: 'L', scale: 1e3, digits: 2 },
-  vd: { label: 'Vd', unit: 'cm³', scale: 1e6, digits: 1 },
-  xmax: { label: 'Xmax', unit: 'mm', scale: 1e3, digits: 2 },
-  xmech: { label: 'Xmech', unit: 'mm', scale: 1e3, digits: 2 },
-  xbl: { label: 'X(Bl)', unit: 'mm', scale: 1e3, digits: 2 },
-  xc: { label: 'X(C)', unit: 'mm', scale: 1e3, digits: 2 },
-  xl: { label: 'X(L)', unit: 'mm', scale: 1e3, digits: 2 },
-  x_bl: { label: 'X(Bl)', unit: 'mm', scale: 1e3, digits: 2 },
-  x_c: { label: 'X(C)', unit: 'mm', scale: 1e3, digits: 2 },
-  x_l: { label: 'X(L)', unit: 'mm', scale: 1e3, digits: 2 },
-  xmax_ls: { label: 'Xmax (large signal)', unit: 'mm', scale: 1e3, digits: 2 },
-  offset: { label: 'Coil rest offset', unit: 'mm', scale: 1e3, digits: 2 },
-  bl_offset: { label: 'Coil rest offset', unit: 'mm', scale: 1e3, digits: 2 },
-  bl0: { label: 'Bl(0)', unit: 'T·m', scale: 1, digits: 2 },
-  kms0: { label: 'Kms(0)', unit: 'N/mm', scale: 1e-3, digits: 2 },
-  le0: { label: 'Le(0)', unit: 'mH', scale: 1e3, digits: 3 },
-  ebp: { label: 'EBP', unit: 'Hz', scale: 1, digits: 0 },
-  pe: { label: 'Power rating', unit: 'W', scale: 1, digits: 0 },
-  power: { label: 'Power rating', unit: 'W', scale: 1, digits: 0 },
-  eta0: { label: 'η0', unit: '%', scale: 100, digits: 2 },
-  spl283v: { label: 'Sensitivity', unit: 'dB @ 2.83 V / 1 m', scale: 1, digits: 1 },
-  spl1w: { label: 'Sensitivity', unit: 'dB @ 1 W / 1 m', scale: 1, digits: 1 },
+  fs: as('Fs', hz),
+  qms: as('Qms', plain),
+  qes: as('Qes', plain),
+  qts: as('Qts', plain),
+  re: as('Re', ohm),
+  le: as('Le', mH),
+  bl: as('Bl', tesla),
+  mms: as('Mms', gram),
+  mmd: as('Mmd', gram),
+  cms: as('Cms', mmPerN),
+  kms: as('Kms', nPerMm),
+  rms: as('Rms', unit('kg/s', 1, 2)),
+  sd: as('Sd', cm2),
+  vas: as('Vas', litre),
+  vd: as('Vd', unit('cm³', 1e6, 1)),
+  xmax: as('Xmax', mm),
+  xmech: as('Xmech', mm),
+  xbl: as('X(Bl)', mm),
+  xc: as('X(C)', mm),
+  xl: as('X(L)', mm),
+  x_bl: as('X(Bl)', mm),
+  x_c: as('X(C)', mm),
+  x_l: as('X(L)', mm),
+  xmax_ls: as('Xmax (large signal)', mm),
+  offset: as('Coil rest offset', mm),
+  bl_offset: as('Coil rest offset', mm),
+  bl0: as('Bl(0)', tesla),
+  kms0: as('Kms(0)', nPerMm),
+  le0: as('Le(0)', mH),
+  ebp: as('EBP', unit('Hz', 1, 0)),
+  pe: as('Power rating', watt),
+  power: as('Power rating', watt),
+  eta0: as('η0', unit('%', 100, 2)),
+  spl283v: as('Sensitivity', unit('dB @ 2.83 V / 1 m', 1, 1)),
+  spl1w: as('Sensitivity', unit('dB @ 1 W / 1 m', 1, 1)),
 };
 
 // A parameter the table does not know by name is still shown in a sensible unit, chosen by its SI unit.
-const byUnit: Record<string, Omit<Display, 'label'>> = {
-  m: { unit: 'mm', scale: 1e3, digits: 2 },
-  kg: { unit: 'g', scale: 1e3, digits: 2 },
-  'm^2': { unit: 'cm²', scale: 1e4, digits: 1 },
-  'm²': { unit: 'cm²', scale: 1e4, digits: 1 },
-  'm^3': { unit: 'L', scale: 1e3, digits: 2 },
-  'm³': { unit: 'L', scale: 1e3, digits: 2 },
-  H: { unit: 'mH', scale: 1e3, digits: 3 },
-  'm/N': { unit: 'mm/N', scale: 1e3, digits: 3 },
-  'N/m': { unit: 'N/mm', scale: 1e-3, digits: 2 },
-  Hz: { unit: 'Hz', scale: 1, digits: 1 },
-  ohm: { unit: 'Ω', scale: 1, digits: 2 },
-  'Ω': { unit: 'Ω', scale: 1, digits: 2 },
+const byUnit: Record<string, Unit> = {
+  m: mm,
+  kg: gram,
+  'm^2': cm2,
+  'm²': cm2,
+  'm^3': litre,
+  'm³': litre,
+  H: mH,
+  'm/N': mmPerN,
+  'N/m': nPerMm,
+  Hz: hz,
+  ohm,
+  'Ω': ohm,
 };
 
 export const parameterOrder = Object.keys(display);

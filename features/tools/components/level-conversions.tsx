@@ -1,12 +1,13 @@
 import { useState, type ReactNode } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import type { LevelsCalcInput } from '../../../shared/schemas/calc';
-import { ChoiceToggle, colors, FieldGrid, fonts, NumberField, space } from '../../ui';
+import { ChoiceToggle, colors, FieldGrid, fonts, space } from '../../ui';
 import type { LevelsResult } from '../api/calc-api';
 import { useCalc } from '../hooks/use-calc';
 import { useNumberFields, type FieldSpec } from '../hooks/use-number-fields';
 import { CalcCard, FormError, ResultBlock } from './calc-card';
-import { displayUnits, formatNumber } from './display-units';
+import { formatNumber } from './display-units';
+import { fieldRenderer } from './field-renderer';
 import { ResultRow } from './result-row';
 import { LEVEL_CAUTION } from './safety';
 
@@ -64,17 +65,7 @@ export function LevelConversions() {
       if (k) serverErrors[k] = message;
     }
   }
-  const field = (k: Key, label: string, placeholder?: string) => (
-    <NumberField
-      label={label}
-      unit={displayUnits[spec[k].unit].symbol}
-      value={f.text[k]}
-      onChangeText={(t) => f.setText(k, t)}
-      error={f.localErrors[k] ?? serverErrors[k]}
-      placeholder={placeholder}
-      testID={`levels-${k}`}
-    />
-  );
+  const field = fieldRenderer(f, spec, (k) => f.localErrors[k] ?? serverErrors[k], 'levels');
   const show = (value: number | undefined, digits = 2) => (value === undefined ? '—' : value.toFixed(digits));
   const pending = [ratio, dist, norm, thd, thdInv].some((s) => s.pending);
 
@@ -88,27 +79,24 @@ export function LevelConversions() {
       pending={pending}
       testID="levels"
     >
-      <Section title="Voltage ratio">
+      <Section title="Voltage ratio" form="ratio" error={ratio.error} results={<ResultRow label="Level difference" value={show(ratio.data?.db)} unit="dB" testID="levels-result-ratio" />}>
         <FieldGrid>
           {field('ratioV', 'Voltage', '4')}
           {field('ratioRef', 'Reference')}
         </FieldGrid>
-        <FormError message={ratio.error} testID="levels-ratio-error" />
-        <ResultBlock testID="levels-ratio-results">
-          <ResultRow label="Level difference" value={show(ratio.data?.db)} unit="dB" testID="levels-result-ratio" />
-        </ResultBlock>
       </Section>
-      <Section title="Distance to 1 m">
+      <Section title="Distance to 1 m" form="distance" error={dist.error} results={<ResultRow label="SPL at 1 m" value={show(dist.data?.spl, 1)} unit="dB SPL" testID="levels-result-distance" />}>
         <FieldGrid>
           {field('distSpl', 'Measured SPL', '80')}
           {field('distM', 'At distance', '2')}
         </FieldGrid>
-        <FormError message={dist.error} testID="levels-distance-error" />
-        <ResultBlock testID="levels-distance-results">
-          <ResultRow label="SPL at 1 m" value={show(dist.data?.spl, 1)} unit="dB SPL" testID="levels-result-distance" />
-        </ResultBlock>
       </Section>
-      <Section title="SPL to 2.83 V / 1 m">
+      <Section
+        title="SPL to 2.83 V / 1 m"
+        form="normalise"
+        error={norm.error}
+        results={<ResultRow label="Sensitivity" value={show(norm.data?.spl, 1)} unit="dB SPL, 2.83 V / 1 m" testID="levels-result-normalise" />}
+      >
         <FieldGrid>
           {field('normSpl', 'Measured SPL', '88')}
           {field('normDist', 'At distance')}
@@ -122,36 +110,40 @@ export function LevelConversions() {
             </>
           )}
         </FieldGrid>
-        <FormError message={norm.error} testID="levels-normalise-error" />
-        <ResultBlock testID="levels-normalise-results">
-          <ResultRow label="Sensitivity" value={show(norm.data?.spl, 1)} unit="dB SPL, 2.83 V / 1 m" testID="levels-result-normalise" />
-        </ResultBlock>
       </Section>
-      <Section title="THD">
+      <Section
+        title="THD"
+        form="thd"
+        error={thd.error ?? thdInv.error}
+        results={
+          <>
+            <ResultRow label="THD in dB" value={show(thd.data?.db, 1)} unit="dB" testID="levels-result-thd-db" />
+            <ResultRow
+              label="THD in %"
+              value={thdInv.data?.percent === undefined ? '—' : formatNumber(thdInv.data.percent, 3)}
+              unit="%"
+              testID="levels-result-thd-percent"
+            />
+          </>
+        }
+      >
         <FieldGrid>
           {field('thdPercent', 'THD', '1')}
           {field('thdDb', 'THD', '-40')}
         </FieldGrid>
-        <FormError message={thd.error ?? thdInv.error} testID="levels-thd-error" />
-        <ResultBlock testID="levels-thd-results">
-          <ResultRow label="THD in dB" value={show(thd.data?.db, 1)} unit="dB" testID="levels-result-thd-db" />
-          <ResultRow
-            label="THD in %"
-            value={thdInv.data?.percent === undefined ? '—' : formatNumber(thdInv.data.percent, 3)}
-            unit="%"
-            testID="levels-result-thd-percent"
-          />
-        </ResultBlock>
       </Section>
     </CalcCard>
   );
 }
 
-function Section({ title, children }: { title: string; children: ReactNode }) {
+/** One conversion: its inputs, then its error line and its results (test ids `levels-${form}-error` and `-results`). */
+function Section({ title, form, error, results, children }: { title: string; form: string; error?: string; results: ReactNode; children: ReactNode }) {
   return (
     <View style={styles.section}>
       <Text style={styles.sectionTitle}>{title}</Text>
       {children}
+      <FormError message={error} testID={`levels-${form}-error`} />
+      <ResultBlock testID={`levels-${form}-results`}>{results}</ResultBlock>
     </View>
   );
 }

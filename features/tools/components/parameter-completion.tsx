@@ -2,7 +2,7 @@ import { StyleSheet, Text, View } from 'react-native';
 import type { ThieleSmallCalcInput } from '../../../shared/schemas/calc';
 import { colors, FieldGrid, fonts, NumberField, space } from '../../ui';
 import type { ThieleSmallResult } from '../api/calc-api';
-import { useCalc } from '../hooks/use-calc';
+import { calcOutcome, useCalc } from '../hooks/use-calc';
 import { useNumberFields, type FieldSpec, type NumberFields } from '../hooks/use-number-fields';
 import { CalcCard, FormError, ResultBlock, waitingMessage } from './calc-card';
 import { displayUnits, formatNumber, toDisplay, type DisplayUnit } from './display-units';
@@ -78,8 +78,7 @@ export function ParameterCompletion({
   const hasAny = Object.values(given).some((v) => v !== undefined);
   const body: ThieleSmallCalcInput | null = !f.hasLocalErrors && hasAny ? { ...given, ...(temperatureC !== undefined ? { temperatureC } : {}) } : null;
   const calc = useCalc<ThieleSmallResult, 'thiele-small'>('thiele-small', body);
-  const err = (k: Key) => f.localErrors[k] ?? (body ? calc.fieldErrors[k] : undefined);
-  const r = body && !calc.error && Object.keys(calc.fieldErrors).length === 0 ? calc.data : undefined;
+  const { error: err, result: r } = calcOutcome(f, body, calc);
   const air = r?.air;
 
   return (

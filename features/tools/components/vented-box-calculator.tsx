@@ -1,11 +1,12 @@
 import { useState } from 'react';
-import { ChoiceToggle, FieldGrid, NumberField } from '../../ui';
+import { ChoiceToggle, FieldGrid } from '../../ui';
 import type { VentedBoxCalcInput } from '../../../shared/schemas/calc';
 import type { VentedBoxResult } from '../api/calc-api';
-import { useCalc } from '../hooks/use-calc';
+import { calcOutcome, useCalc } from '../hooks/use-calc';
 import { useNumberFields, type FieldSpec } from '../hooks/use-number-fields';
 import { CalcCard, FormError, ResultBlock, waitingMessage } from './calc-card';
-import { displayUnits, toDisplay } from './display-units';
+import { toDisplay } from './display-units';
+import { fieldRenderer } from './field-renderer';
 import { ResultRow } from './result-row';
 import { BOX_CAUTION } from './safety';
 
@@ -24,20 +25,8 @@ export function VentedBoxCalculator() {
   const ready = !f.hasLocalErrors && fs !== undefined && qts !== undefined && vas !== undefined;
   const body: VentedBoxCalcInput | null = ready ? { fs, qts, vas, alignment, ...(ql !== undefined ? { ql } : {}) } : null;
   const calc = useCalc<VentedBoxResult, 'vented-box'>('vented-box', body);
-  const err = (k: Key) => f.localErrors[k] ?? (body ? calc.fieldErrors[k] : undefined);
-  const r = body && !calc.error && Object.keys(calc.fieldErrors).length === 0 ? calc.data : undefined;
-
-  const field = (k: Key, label: string, placeholder: string) => (
-    <NumberField
-      label={label}
-      unit={displayUnits[spec[k].unit].symbol}
-      value={f.text[k]}
-      onChangeText={(t) => f.setText(k, t)}
-      error={err(k)}
-      placeholder={placeholder}
-      testID={`vented-box-${k}`}
-    />
-  );
+  const { error, result: r } = calcOutcome(f, body, calc);
+  const field = fieldRenderer(f, spec, error, 'vented-box');
 
   return (
     <CalcCard

@@ -57,3 +57,14 @@ export function useCalc<T, K extends CalcName = CalcName>(name: K, body: CalcInp
   if (!settled) return { ...idle, pending: true };
   return { data: settled.data, fieldErrors: settled.fieldErrors, error: settled.error, pending: settled.key !== key };
 }
+
+/**
+ * What a calculator form shows for its state: a field's message (its own parse error first, then the
+ * server's for the body sent) and the result, held back while any error stands.
+ */
+export function calcOutcome<T, K extends string>(fields: { localErrors: Partial<Record<K, string>> }, body: object | null, calc: CalcState<T>) {
+  return {
+    error: (k: K): string | undefined => fields.localErrors[k] ?? (body ? calc.fieldErrors[k] : undefined),
+    result: body && !calc.error && Object.keys(calc.fieldErrors).length === 0 ? calc.data : undefined,
+  };
+}
