@@ -1,4 +1,5 @@
 import { readFileSync } from 'node:fs';
+import type { CDPSession } from 'playwright-core';
 import type { DriverListResponse } from '../shared/schemas/drivers';
 import { api, baseUrl, openBrowser, screenshotPath, type BrowserSession, viewports, signInWithTestAccount, chartInk } from './support/browser';
 
@@ -149,6 +150,147 @@ describe.each(viewports)('stack at $name size ($width x $height)', ({ name, widt
     for (const slug of slugs) expect(lines[0]).toContain(`${slug}_spl_db`);
     expect(lines.length - 1).toBeGreaterThan(470);
     expect(lines.length - 1).toBeLessThan(490);
+    expect(s.errors).toEqual([]);
+  });
+});
+
+/** "678 Hz" or "1.23 kHz" back to hertz. */
+function hertz(text: string): number {
+  const m = /^(\d+(?:\.\d+)?) (Hz|kHz)$/.exec(text);
+  if (!m) throw new Error(`not a frequency: ${text}`);
+  return Number(m[1]) * (m[2] === 'kHz' ? 1000 : 1);
+}
+
+describe('stack on a touch phone (390 x 844)', () => {
+  let s: BrowserSession;
+  let slugs: string[];
+  let cdp: CDPSession;
+  beforeAll(async () => {
+    const list = await api<DriverListResponse>('/api/drivers?type=mid-range&sizeMin=3&sizeMax=3&limit=4');
+    slugs = list.items.map((d) => d.slug);
+    if (slugs.length < 4) throw new Error(`demo data has ${slugs.length} 3-inch mid-ranges, need 4`);
+    s = await openBrowser({ width: 390, height: 844 }, { touch: true });
+    // Touches sent through the browser's own input pipeline, as a finger's would be: Chromium turns
+    // them into pointer and touch events and applies touch-action, so the page may scroll instead.
+    cdp = await s.context.newCDPSession(s.page);
+  });
+  afterAll(() => s.close());
+
+  const screen = () => s.page.getByTestId('stack-screen');
+  const spl = () => screen().getByTestId('stack-chart-spl');
+  type Point = { x: number; y: number };
+
+  async function touchDrag(from: Point, to: Point, steps = 10) {
+    const at = (k: number) => ({ x: from.x + ((to.x - from.x) * k) / steps, y: from.y + ((to.y - from.y) * k) / steps });
+    await cdp.send('Input.dispatchTouchEvent', { type: 'touchStart', touchPoints: [at(0)] });
+    for (let k = 1; k <= steps; k++) {
+      await cdp.send('Input.dispatchTouchEvent', { type: 'touchMove', touchPoints: [at(k)] });
+      await s.page.waitForTimeout(16);
+    }
+    await cdp.send('Input.dispatchTouchEvent', { type: 'touchEnd', touchPoints: [] });
+    await s.page.waitForTimeout(150);
+  }
+
+  /** The SPL plot's box (the cursor layer covers exactly the plot) and a point at a fraction across it. */
+  async function plot() {
+    const box = await spl().getByTestId('chart-cursor-layer').boundingBox();
+    if (!box) throw new Error('no cursor layer on the SPL chart');
+    return { box, at: (fx: number, fy = 0.5): Point => ({ x: box.x + box.width * fx, y: box.y + box.height * fy }) };
+  }
+
+  async function readRows() {
+    const rows: { spl: string; thd: string; z: string }[] = [];
+    for (let i = 0; i < 4; i++) {
+      const text = async (k: string) => (await screen().getByTestId(`readout-${i}-${k}`).textContent()) ?? '';
+      rows.push({ spl: await text('spl'), thd: await text('thd'), z: await text('z') });
+    }
+    return rows;
+  }
+
+  /** The screen's scrolling column: the ScrollView renders as a div with its own overflow. */
+  const scrollTop = () =>
+    screen().evaluate((root) => {
+      const all = root.querySelectorAll('div');
+      for (let i = 0; i < all.length; i++) {
+        const el = all[i];
+        const oy = getComputedStyle(el).overflowY;
+        if ((oy === 'auto' || oy === 'scroll') && el.scrollHeight > el.clientHeight) return el.scrollTop;
+      }
+      return -1;
+    });
+
+  it('moves the shared cursor with a finger dragged along the SPL chart, left reading lower than right', async () => {
+    await s.page.goto(`${baseUrl()}/stack?drivers=${slugs.join(',')}`);
+    await screen().getByTestId('slot-3').waitFor();
+    expect(await chartInk(s.page, spl())).toBeGreaterThan(1500);
+    const readoutBox = screen().getByTestId('cursor-readout');
+    // The readout sits just above the SPL chart; bring it to the top so both are on screen.
+    await readoutBox.evaluate((el) => el.scrollIntoView({ block: 'start' }));
+    await s.page.waitForTimeout(200);
+    // Before any touch: every row is there as dashes, so the first touch moves nothing on the page.
+    expect(await screen().getByTestId('cursor-frequency').count()).toBe(0);
+    expect((await readRows()).map((r) => r.spl)).toEqual(['—', '—', '—', '—']);
+    const emptyHeight = (await readoutBox.boundingBox())?.height;
+    const p = await plot();
+
+    await touchDrag(p.at(0.05), p.at(0.2));
+    const left = (await screen().getByTestId('cursor-frequency').textContent()) ?? '';
+    const leftRows = await readRows();
+    for (const r of leftRows) {
+      expect(r.spl).toMatch(/^\d+\.\d dB$/);
+      expect(r.thd).toMatch(/^\d+\.\d\d %$/);
+      expect(r.z).toMatch(/^\d+\.\d\d Ω$/);
+    }
+    // The cursor follows the finger, not just the touch: 20 Hz–20 kHz is three decades across the plot.
+    expect(hertz(left) / (20 * 1000 ** 0.2)).toBeGreaterThan(0.9);
+    expect(hertz(left) / (20 * 1000 ** 0.2)).toBeLessThan(1.1);
+    // Every chart draws the shared cursor.
+    for (const id of ['stack-chart-spl', 'stack-chart-thd', 'stack-chart-impedance']) {
+      expect({ id, lines: await screen().getByTestId(id).getByTestId('chart-cursor-line').count() }).toEqual({ id, lines: 1 });
+    }
+    // A sideways drag belongs to the cursor: the page did not scroll under it, nothing moved.
+    const afterLeft = await plot();
+    expect(afterLeft.box.y).toBeCloseTo(p.box.y, 0);
+    expect((await readoutBox.boundingBox())?.height).toBe(emptyHeight);
+
+    await touchDrag(p.at(0.6), p.at(0.85));
+    const right = (await screen().getByTestId('cursor-frequency').textContent()) ?? '';
+    expect(hertz(right)).toBeGreaterThan(hertz(left));
+    expect(hertz(right) / (20 * 1000 ** 0.85)).toBeGreaterThan(0.9);
+    expect(hertz(right) / (20 * 1000 ** 0.85)).toBeLessThan(1.1);
+    const rightRows = await readRows();
+    expect(rightRows.map((r) => r.spl)).not.toEqual(leftRows.map((r) => r.spl));
+    for (const r of rightRows) expect(r.spl).toMatch(/^\d+\.\d dB$/);
+    expect((await readoutBox.boundingBox())?.height).toBe(emptyHeight);
+    await s.page.screenshot({ path: screenshotPath('stack-touch-phone') });
+
+    // A mostly sideways drag that wanders up and down stays with the cursor to its end (half way
+    // across is the geometric mean, 632 Hz) instead of turning into a scroll part way.
+    await touchDrag(p.at(0.3, 0.3), p.at(0.5, 0.6));
+    const middle = hertz((await screen().getByTestId('cursor-frequency').textContent()) ?? '');
+    expect(middle / Math.sqrt(20 * 20000)).toBeGreaterThan(0.9);
+    expect(middle / Math.sqrt(20 * 20000)).toBeLessThan(1.1);
+    expect((await plot()).box.y).toBeCloseTo(p.box.y, 0);
+
+    // A tap alone sets the cursor too.
+    await s.page.touchscreen.tap(p.at(0.4).x, p.at(0.4).y);
+    await s.page.waitForTimeout(150);
+    const tapped = hertz((await screen().getByTestId('cursor-frequency').textContent()) ?? '');
+    expect(tapped / (20 * 1000 ** 0.4)).toBeGreaterThan(0.9);
+    expect(tapped / (20 * 1000 ** 0.4)).toBeLessThan(1.1);
+    expect(s.errors).toEqual([]);
+  });
+
+  it('still scrolls the page with a vertical swipe that starts on the chart', async () => {
+    const before = (await screen().getByTestId('cursor-frequency').textContent()) ?? '';
+    const top = await scrollTop();
+    expect(top).toBeGreaterThanOrEqual(0);
+    const p = await plot();
+    // Started well left of the cursor: the browser takes the swipe as a scroll and the cursor stays put.
+    await touchDrag(p.at(0.1, 0.9), { x: p.at(0.1).x, y: p.at(0.1, 0.9).y - 300 }, 12);
+    await s.page.waitForTimeout(400);
+    expect(await scrollTop()).toBeGreaterThan(top + 100);
+    await expect(screen().getByTestId('cursor-frequency').textContent()).resolves.toBe(before);
     expect(s.errors).toEqual([]);
   });
 });

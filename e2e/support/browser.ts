@@ -24,14 +24,20 @@ export interface BrowserSession {
   errors: string[];
 }
 
+export interface BrowserOptions {
+  /** A touch phone: touch events on, and the page's meta viewport honoured as a mobile browser does. */
+  touch?: boolean;
+}
+
 /** A fresh browser profile per session, so cookies and storage never leak between flows. */
-export async function openBrowser(viewport: { width: number; height: number }): Promise<BrowserSession> {
+export async function openBrowser(viewport: { width: number; height: number }, options: BrowserOptions = {}): Promise<BrowserSession> {
   const profile = mkdtempSync(join(tmpdir(), 'conestack-e2e-'));
   const context = await chromium.launchPersistentContext(profile, {
     executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
     args: quietFlags,
     viewport,
     acceptDownloads: true,
+    ...(options.touch ? { hasTouch: true, isMobile: true } : {}),
   });
   const page = context.pages()[0] ?? (await context.newPage());
   const errors: string[] = [];
