@@ -146,4 +146,30 @@ describe('a reviewer submits measurements', () => {
     expect(search.items.map((d) => d.model)).not.toContain(model);
     expect(s.errors).toEqual([]);
   });
+
+  it('adds a second sample to a driver already listed, picked from the catalogue', async () => {
+    const listed = (await api<DriverListResponse>('/api/drivers?type=mid-range&sizeMin=3&sizeMax=3')).items[1];
+    await screen().getByTestId('submit-another').click();
+    const driverStep = screen().getByTestId('submit-step-driver');
+    await driverStep.getByTestId('submit-driver-mode-existing').click();
+    await driverStep.getByTestId('submit-driver-search').fill(listed.model);
+    await driverStep.getByTestId(`submit-driver-pick-${listed.slug}`).click();
+    await expect(driverStep.getByTestId('submit-driver-chosen').textContent()).resolves.toBe(`Adding a measurement set to ${listed.maker.name} ${listed.model}`);
+    await screen().getByTestId('submit-next').click();
+    await screen().getByTestId('submit-baffle').fill('600 × 400 mm flat baffle');
+    await screen().getByTestId('submit-sample').fill('S2');
+    await screen().getByTestId('submit-next').click();
+    const chooser = s.page.waitForEvent('filechooser');
+    await screen().getByTestId('submit-choose-files').click();
+    await (await chooser).setFiles(join(files.dir, files.spl[0]));
+    await screen().getByTestId(`submit-file-${files.spl[0].replace(/[^a-zA-Z0-9]+/g, '-')}-summary`).waitFor();
+    await screen().getByTestId('submit-stepbar-5').click();
+    await screen().getByTestId('submit-send').click();
+    await screen().getByTestId('submit-sent').getByText('Open the listed entry').waitFor();
+    const list = ((await (await s.page.request.get(`${baseUrl()}/api/submissions/mine`)).json()) as { submissions: MySubmission[] }).submissions;
+    expect(list.map((x) => x.driverSlug).slice(0, 2)).toEqual([listed.slug, expect.stringMatching(/^quillfield-audio-qm-3-/)]);
+    expect(list[0]).toMatchObject({ status: 'pending', curveCount: 1 });
+    await screen().getByTestId('my-submissions').getByText(`${listed.maker.name} ${listed.model}`).waitFor();
+    expect(s.errors).toEqual([]);
+  });
 });
