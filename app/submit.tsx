@@ -1,5 +1,7 @@
+import { useLocalSearchParams } from 'expo-router';
 import { SubmitScreen } from '../features/submissions';
 
 export default function SubmitRoute() {
-  return <SubmitScreen />;
+  const { driver } = useLocalSearchParams<{ driver?: string }>();
+  return <SubmitScreen driverSlug={Array.isArray(driver) ? driver[0] : driver} />;
 }

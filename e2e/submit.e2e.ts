@@ -172,4 +172,12 @@ describe('a reviewer submits measurements', () => {
     await screen().getByTestId('my-submissions').getByText(`${listed.maker.name} ${listed.model}`).waitFor();
     expect(s.errors).toEqual([]);
   });
+
+  it('starts a submission from a driver page with that driver picked', async () => {
+    const listed = (await api<DriverListResponse>('/api/drivers?type=tweeter')).items[0];
+    await s.page.goto(`${baseUrl()}/drivers/${listed.slug}`);
+    await s.page.getByTestId('driver-screen').getByTestId('driver-submit-link').click();
+    await s.page.waitForURL(new RegExp(`/submit\\?driver=${listed.slug}$`));
+    await expect(screen().getByTestId('submit-driver-chosen').textContent()).resolves.toBe(`Adding a measurement set to ${listed.maker.name} ${listed.model}`);
+  });
 });

@@ -7,6 +7,7 @@ import { CautionsBlock, DriverInfo, MethodBlock, SetPicker, SpreadTable, setSumm
 import { FiguresPanel } from '../components/figures-panel';
 import { ParameterComparison } from '../components/parameter-comparison';
 import { StackButton } from '../components/stack-button';
+import { SubmitLink } from '../components/submit-link';
 import { useAliasRedirect } from '../hooks/use-alias-redirect';
 import { useDriver } from '../hooks/use-driver';
 import { takeRedirectNote } from '../logic/driver-notes';
@@ -84,6 +85,7 @@ export function DriverScreen({ slug, bandLo, bandHi }: DriverScreenProps) {
           </Text>
         ) : null}
         <StackButton slug={data.slug} />
+        <SubmitLink slug={data.slug} />
       </View>
       <CautionsBlock driver={data} />
       {wide ? (

@@ -1,8 +1,9 @@
 import { Link } from 'expo-router';
-import { useState } from 'react';
+import { useEffect, useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import { mutate } from 'swr';
 import { RequireRole } from '../../account';
+import { useDriver } from '../../drivers';
 import { useNumberFields, useParameterFields, type FieldSpec } from '../../tools';
 import { ActionButton, ApiRequestError, Card, colors, fonts, ScreenFrame, space, useBreakpoint } from '../../ui';
 import { sendSubmission } from '../api/submissions-api';
@@ -34,9 +35,16 @@ function storedSmall(values: Partial<Record<string, number>>): ParameterValues {
   return rest;
 }
 
-function SubmitForm({ onSent }: { onSent: (sent: Sent) => void }) {
+function SubmitForm({ onSent, driverSlug }: { onSent: (sent: Sent) => void; driverSlug?: string }) {
   const [step, setStep] = useState(0);
   const d = useSubmissionDraft();
+  // Arriving from a driver's page: that driver is picked once its name is known.
+  const linked = useDriver(driverSlug && /^[a-z0-9-]{1,160}$/.test(driverSlug) ? driverSlug : undefined);
+  const linkedData = linked.data;
+  const setDriver = d.setDriver;
+  useEffect(() => {
+    if (linkedData) setDriver({ mode: 'existing', slug: linkedData.slug, label: `${linkedData.maker.name} ${linkedData.model}` });
+  }, [linkedData, setDriver]);
   const small = useParameterFields();
   const large = useNumberFields(largeSpec);
   const [sending, setSending] = useState(false);
@@ -111,7 +119,7 @@ function SubmitForm({ onSent }: { onSent: (sent: Sent) => void }) {
 }
 
 /** The reviewer's desk: a new submission in five steps, and the state of earlier ones. */
-export function SubmitScreen() {
+export function SubmitScreen({ driverSlug }: { driverSlug?: string } = {}) {
   const wide = useBreakpoint() === 'wide';
   const [formKey, setFormKey] = useState(0);
   const [sent, setSent] = useState<Sent | null>(null);
@@ -145,7 +153,7 @@ export function SubmitScreen() {
                 />
               </Card>
             ) : (
-              <SubmitForm key={formKey} onSent={setSent} />
+              <SubmitForm key={formKey} onSent={setSent} driverSlug={formKey === 0 ? driverSlug : undefined} />
             )}
           </View>
           <View style={wide ? styles.side : null}>
