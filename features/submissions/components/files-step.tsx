@@ -1,7 +1,7 @@
 import * as DocumentPicker from 'expo-document-picker';
 import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
-import { ActionButton, ChoiceToggle, colors, fonts, NumberField, radius, space, TextField } from '../../ui';
+import { ActionButton, ChoiceToggle, colors, FieldGrid, fonts, NumberField, radius, space, TextField } from '../../ui';
 import type { SubmissionDraft } from '../hooks/use-submission-draft';
 import { extraHarmonics, fileMeta, kindNeeds, UPLOAD_KINDS, type DraftFile, type FileSettings } from '../logic/draft';
 
@@ -60,14 +60,16 @@ function FileRow({ file, all, draft }: { file: DraftFile; all: readonly DraftFil
       </View>
       {open ? (
         <View style={styles.settings}>
-          <TextField
-            label="Columns"
-            value={file.settings.columns}
-            onChangeText={(columns) => setSettings({ columns })}
-            placeholder="e.g. 1, 2, 3"
-            hint="Frequency, value and optional phase, counting from 1. Empty: taken from the header, else the first columns."
-            testID={`${t}-columns`}
-          />
+          <FieldGrid>
+            <TextField
+              label="Columns"
+              value={file.settings.columns}
+              onChangeText={(columns) => setSettings({ columns })}
+              placeholder="e.g. 1, 2, 3"
+              hint="Frequency, value and optional phase, counting from 1. Empty: taken from the header, else the first columns."
+              testID={`${t}-columns`}
+            />
+          </FieldGrid>
           <Text style={styles.label}>x unit</Text>
           <ChoiceToggle label="x unit" options={X_UNITS} value={file.settings.xUnit} onChange={(xUnit) => setSettings({ xUnit })} testID={`${t}-xunit`} />
           {distortion ? (
