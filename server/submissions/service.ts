@@ -98,6 +98,16 @@ export function createSubmissionsService(repo: SubmissionsRepository) {
               fields: missing.map((t) => ({ field: `uploads.${input.uploads.indexOf(t)}`, message: 'unknown upload' })),
             });
           }
+          // Two files for the same curve (SPL at one angle, THD at one level) would leave the set ambiguous.
+          const seen = new Map<string, string>();
+          const clashes = [];
+          for (const u of staged) {
+            const key = `${u.kind}|${u.kind === 'spl' ? (u.angleDeg ?? 0) : u.angleDeg}|${u.driveLevelV}`;
+            const other = seen.get(key);
+            if (other) clashes.push({ field: `uploads.${input.uploads.indexOf(u.token)}`, message: `${u.fileName}: the same curve as uploads.${input.uploads.indexOf(other)}` });
+            else seen.set(key, u.token);
+          }
+          if (clashes.length) throw new ApiError(400, errorCodes.validation, 'Two uploads give the same curve', { fields: clashes });
           const { driveVoltageV, distanceM } = input.method;
           const plan = normalisationPlan(driveVoltageV, distanceM);
           const anglesDeg = [...new Set(staged.filter((u) => u.kind === 'spl').map((u) => u.angleDeg ?? 0))];

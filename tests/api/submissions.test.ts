@@ -159,6 +159,15 @@ describe('reviewer submissions', () => {
     expect((await sub.json()).error.details.fields).toEqual([{ field: 'uploads.0', message: 'unknown upload' }]);
   });
 
+  it('refuses two uploads of the same curve, naming the second', async () => {
+    const res = await upload(reviewer, [{ name: 'spl-0deg-tab.txt', meta: { kind: 'spl', angleDeg: 0 } }, { name: 'spl-30deg-semicolon-decimal-comma.csv', meta: { kind: 'spl', angleDeg: 0 } }]);
+    const { files } = await res.json();
+    const sub = await submit({ driver: { makerName: `${P} Works`, model: 'Test 82', type: 'mid-range', nominalSizeIn: 3, nominalImpedanceOhm: 4 }, method, uploads: files.map((f: { token: string }) => f.token) });
+    expect(sub.status).toBe(400);
+    expect((await sub.json()).error.details.fields).toEqual([{ field: 'uploads.1', message: 'spl-30deg-semicolon-decimal-comma.csv: the same curve as uploads.0' }]);
+    expect(await db('drivers').where({ model: 'Test 82' }).first()).toBeUndefined();
+  });
+
   it('rejects a bad submission body naming each field', async () => {
     const sub = await submit({ driver: { slug: 'Not A Slug' }, method: { ...method, distanceM: -1 }, uploads: [] });
     expect(sub.status).toBe(400);
