@@ -91,7 +91,9 @@ export function createSubmissionsService(repo: SubmissionsRepository) {
     async submit(user: User, input: z.infer<typeof submissionSchema>) {
       try {
         return await repo.transaction(async (trx) => {
-          const staged = await repo.stagedUploads(trx, input.uploads, user.id);
+          // In the order the reviewer listed them, so messages and curves follow that order, not the table's.
+          const order = new Map(input.uploads.map((t, i) => [t, i]));
+          const staged = (await repo.stagedUploads(trx, input.uploads, user.id)).sort((a, b) => (order.get(a.token) ?? 0) - (order.get(b.token) ?? 0));
           const missing = input.uploads.filter((t) => !staged.some((s) => s.token === t));
           if (missing.length) {
             throw new ApiError(400, errorCodes.validation, `${missing.length} upload(s) are unknown, not yours or already submitted`, {
@@ -104,7 +106,7 @@ export function createSubmissionsService(repo: SubmissionsRepository) {
           for (const u of staged) {
             const key = `${u.kind}|${u.kind === 'spl' ? (u.angleDeg ?? 0) : u.angleDeg}|${u.driveLevelV}`;
             const other = seen.get(key);
-            if (other) clashes.push({ field: `uploads.${input.uploads.indexOf(u.token)}`, message: `${u.fileName}: the same curve as uploads.${input.uploads.indexOf(other)}` });
+            if (other) clashes.push({ field: `uploads.${order.get(u.token)}`, message: `${u.fileName}: the same curve as uploads.${order.get(other)}` });
             else seen.set(key, u.token);
           }
           if (clashes.length) throw new ApiError(400, errorCodes.validation, 'Two uploads give the same curve', { fields: clashes });
