@@ -1,6 +1,7 @@
 // Turns a demo driver and one of its sets into the rows a reviewer's upload would have produced:
 // normalised curves on the common grid, small- and large-signal parameters and the maker's sheet.
 import { completeThieleSmall } from '../../shared/acoustics/thiele-small';
+import { parameterUnit } from '../../shared/catalogue/parameter-units';
 import { fitImpedance } from '../../shared/acoustics/impedance';
 import { excursionLimits } from '../../shared/acoustics/large-signal';
 import { synthesiseDriverCurves } from '../../shared/acoustics/synthesis';
@@ -12,11 +13,6 @@ export interface BuiltSet {
   parameters: { name: string; value: number; unit: string; signal: 'small' | 'large' }[];
   anglesDeg: number[];
 }
-
-const units: Record<string, string> = {
-  fs: 'Hz', qms: '', qes: '', qts: '', re: 'ohm', le: 'H', mms: 'kg', cms: 'm/N', kms: 'N/m', rms: 'kg/s', bl: 'T·m', sd: 'm^2',
-  vas: 'm^3', xmax: 'm', spl283v: 'dB', spl1w: 'dB', eta0: '', ebp: 'Hz', vd: 'm^3',
-};
 
 const sig = (v: number, digits = 5) => Number(v.toPrecision(digits));
 const fix = (v: number, digits: number) => Number(v.toFixed(digits));
@@ -70,7 +66,7 @@ export function buildSet(d: DemoDriver, set: DemoSetSpec): BuiltSet {
   const parameters: BuiltSet['parameters'] = [];
   for (const name of ['fs', 'qms', 'qes', 'qts', 're', 'le', 'bl', 'mms', 'cms', 'kms', 'rms', 'sd', 'vas', 'xmax', 'spl283v', 'spl1w', 'eta0', 'ebp', 'vd'] as const) {
     const v = ts.values[name];
-    if (v !== undefined && Number.isFinite(v)) parameters.push({ name, value: sig(v, 5), unit: units[name] ?? '', signal: 'small' });
+    if (v !== undefined && Number.isFinite(v)) parameters.push({ name, value: sig(v, 5), unit: parameterUnit(name), signal: 'small' });
   }
   const exc = excursionLimits({ x: ls.x, bl: ls.bl, kms: ls.kms, le: ls.le });
   if (exc.xBl) parameters.push({ name: 'x_bl', value: sig(exc.xBl.limit, 4), unit: 'm', signal: 'large' });
@@ -88,7 +84,7 @@ export function makerSheet(d: DemoDriver, measured: BuiltSet['parameters']): { n
   const get = (n: string) => measured.find((p) => p.name === n)?.value;
   const out: { name: string; value: number; unit: string }[] = [];
   const add = (name: string, v: number | undefined, digits: number) => {
-    if (v !== undefined) out.push({ name, value: Number(v.toPrecision(digits)), unit: units[name] ?? '' });
+    if (v !== undefined) out.push({ name, value: Number(v.toPrecision(digits)), unit: parameterUnit(name) });
   };
   add('fs', (get('fs') ?? 0) * d.specBias.fs, 3);
   add('qts', get('qts'), 2);

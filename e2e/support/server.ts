@@ -1,20 +1,8 @@
 import { spawn, type ChildProcess } from 'node:child_process';
-import { createServer } from 'node:net';
 import { join } from 'node:path';
+import { freePort } from '../../tests/support/free-port';
 
 const root = join(__dirname, '..', '..');
-
-export function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const srv = createServer();
-    srv.once('error', reject);
-    srv.listen(0, '127.0.0.1', () => {
-      const address = srv.address();
-      const port = typeof address === 'object' && address ? address.port : 0;
-      srv.close(() => resolve(port));
-    });
-  });
-}
 
 /** Starts the real server (API + exported web app) against the test database. */
 export async function startAppServer(): Promise<{ url: string; child: ChildProcess }> {

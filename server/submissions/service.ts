@@ -1,12 +1,13 @@
 import { randomBytes } from 'node:crypto';
 import { interpolateLog, logFrequencyGrid } from '../../shared/acoustics/curves';
 import { normaliseSpl } from '../../shared/acoustics/levels';
+import { parameterUnit } from '../../shared/catalogue/parameter-units';
 import { errorCodes } from '../../shared/api/errors';
 import { findNearDuplicates } from '../../shared/catalogue/near-duplicates';
 import type { NearDuplicateQuery, NearDuplicatesResponse, UploadMeta } from '../../shared/schemas/submissions';
 import type { submissionSchema } from '../../shared/schemas/submissions';
 import type { User } from '../../shared/schemas/users';
-import { parseMeasurementFile, type ParseResult } from '../../shared/uploads';
+import { ACOUSTIC_KINDS, parseMeasurementFile, type CurveKind, type ParseResult } from '../../shared/uploads';
 import type { z } from 'zod';
 import { ApiError, notFound } from '../http/api-error';
 import type { SubmissionsRepository } from './repository';
@@ -14,11 +15,6 @@ import type { SubmissionsRepository } from './repository';
 const GRID = logFrequencyGrid();
 /** How long a read file waits for its submission before it is dropped. */
 export const STAGED_UPLOAD_HOURS = 24;
-const ACOUSTIC = new Set(['spl', 'impedance', 'thd', 'h2', 'h3', 'imd']);
-const UNITS: Record<string, string> = {
-  fs: 'Hz', re: 'ohm', le: 'H', bl: 'T·m', mms: 'kg', mmd: 'kg', cms: 'm/N', kms: 'N/m', rms: 'kg/s', sd: 'm^2', vas: 'm^3', xmax: 'm',
-  x_bl: 'm', x_c: 'm', x_l: 'm', bl0: 'T·m', kms0: 'N/m',
-};
 
 export interface UploadedFile {
   originalname: string;
@@ -44,10 +40,10 @@ type NormalisedCurve = { kind: string; angleDeg: number | null; driveLevelV: num
 
 /** Reads one stored original with its saved settings and puts it on the common grid. */
 export function normaliseUpload(u: StoredUpload, splShift: number): NormalisedCurve | { error: string } {
-  const parsed = parseMeasurementFile({ name: u.fileName, bytes: new Uint8Array(u.bytes), kind: u.kind as never, options: u.settings.options });
+  const parsed = parseMeasurementFile({ name: u.fileName, bytes: new Uint8Array(u.bytes), kind: u.kind as CurveKind, options: u.settings.options });
   if (!parsed.ok) return { error: parsed.error.message };
   const p = parsed.points;
-  if (!ACOUSTIC.has(u.kind)) return { kind: u.kind, angleDeg: null, driveLevelV: null, x: p.x, y: p.y, phase: p.phase };
+  if (!ACOUSTIC_KINDS.includes(u.kind as CurveKind)) return { kind: u.kind, angleDeg: null, driveLevelV: null, x: p.x, y: p.y, phase: p.phase };
   const x: number[] = [];
   const y: number[] = [];
   const ph: number[] = [];
@@ -120,7 +116,7 @@ export function createSubmissionsService(repo: SubmissionsRepository) {
             if ('error' in curve) throw new ApiError(400, errorCodes.validation, curve.error, { fields: [{ field: `uploads.${input.uploads.indexOf(u.token)}`, message: curve.error }] });
             await repo.insertCurve(trx, created.setId, curve);
           }
-          const parameters = input.parameters.map((p) => ({ name: p.name, value: p.value, unit: UNITS[p.name] ?? '', signal: p.signal }));
+          const parameters = input.parameters.map((p) => ({ name: p.name, value: p.value, unit: parameterUnit(p.name), signal: p.signal }));
           await repo.finishSet(trx, created.setId, parameters, staged.map((s) => s.id));
           return created;
         });

@@ -1,19 +1,7 @@
 import type { Server } from 'node:http';
-import { createServer } from 'node:net';
 import type { Knex } from 'knex';
 import { createApp, type AppOptions } from '../../server/app';
-
-export function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const srv = createServer();
-    srv.once('error', reject);
-    srv.listen(0, '127.0.0.1', () => {
-      const a = srv.address();
-      const port = typeof a === 'object' && a ? a.port : 0;
-      srv.close(() => resolve(port));
-    });
-  });
-}
+import { freePort } from './free-port';
 
 /** A real listening server: the sign-in flow makes the server call its own token endpoint. */
 export async function startTestServer(db: Knex, options: Partial<AppOptions> = {}, port?: number): Promise<{ url: string; close: () => Promise<void> }> {

@@ -1,7 +1,8 @@
 import * as DocumentPicker from 'expo-document-picker';
 import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
-import { ActionButton, ChoiceToggle, colors, FieldGrid, fonts, NumberField, radius, space, TextField } from '../../ui';
+import { ActionButton, ChoiceToggle, colors, fonts, NumberField, radius, space, TextField } from '../../ui';
+import { DISTORTION_KINDS } from '../../../shared/uploads';
 import type { SubmissionDraft } from '../hooks/use-submission-draft';
 import { extraHarmonics, fileMeta, kindNeeds, UPLOAD_KINDS, type DraftFile, type FileSettings } from '../logic/draft';
 
@@ -26,7 +27,7 @@ function FileRow({ file, all, draft }: { file: DraftFile; all: readonly DraftFil
   const meta = fileMeta(file);
   const t = `submit-file-${file.name.replace(/[^a-zA-Z0-9]+/g, '-')}${file.copyOf ? `-${file.kind}` : ''}`;
   const setSettings = (patch: Partial<FileSettings>) => onChange(file.id, { settings: { ...file.settings, ...patch } });
-  const distortion = ['thd', 'h2', 'h3', 'imd'].includes(file.kind);
+  const distortion = DISTORTION_KINDS.includes(file.kind);
   return (
     <View style={styles.row} testID={t}>
       <View style={styles.rowHead}>
@@ -60,16 +61,14 @@ function FileRow({ file, all, draft }: { file: DraftFile; all: readonly DraftFil
       </View>
       {open ? (
         <View style={styles.settings}>
-          <FieldGrid>
-            <TextField
-              label="Columns"
-              value={file.settings.columns}
-              onChangeText={(columns) => setSettings({ columns })}
-              placeholder="e.g. 1, 2, 3"
-              hint="Frequency, value and optional phase, counting from 1. Empty: taken from the header, else the first columns."
-              testID={`${t}-columns`}
-            />
-          </FieldGrid>
+          <TextField
+            label="Columns"
+            value={file.settings.columns}
+            onChangeText={(columns) => setSettings({ columns })}
+            placeholder="e.g. 1, 2, 3"
+            hint="Frequency, value and optional phase, counting from 1. Empty: taken from the header, else the first columns."
+            testID={`${t}-columns`}
+          />
           <Text style={styles.label}>x unit</Text>
           <ChoiceToggle label="x unit" options={X_UNITS} value={file.settings.xUnit} onChange={(xUnit) => setSettings({ xUnit })} testID={`${t}-xunit`} />
           {distortion ? (
@@ -146,7 +145,7 @@ const styles = StyleSheet.create({
   name: { fontFamily: fonts.semibold, fontSize: 14, color: colors.ink, flexShrink: 1 },
   inline: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'flex-end', gap: space.md },
   settings: { gap: space.sm },
-  short: { width: 150, flexDirection: 'row' },
+  short: { width: 150 },
   label: { fontFamily: fonts.semibold, fontSize: 13, color: colors.ink },
   meta: { fontFamily: fonts.regular, fontSize: 13, color: colors.inkSoft },
   ok: { fontFamily: fonts.regular, fontSize: 13, color: colors.accent },

@@ -24,23 +24,20 @@ export function MethodStep({ value, onChange }: { value: MethodText; onChange: (
         <TextField label="Date measured" value={value.measuredOn} onChangeText={(measuredOn) => onChange({ measuredOn })} testID="submit-date" placeholder="YYYY-MM-DD" />
         <TextField label="Sample id" value={value.sampleId} onChangeText={(sampleId) => onChange({ sampleId })} testID="submit-sample" placeholder="serial or your own label" />
       </FieldGrid>
-      {/* In a row, so the fields take the width rather than a field-box height. */}
-      <FieldGrid>
-        <TextField
-          label="Baffle or enclosure"
-          value={value.baffle}
-          onChangeText={(baffle) => onChange({ baffle })}
-          testID="submit-baffle"
-          placeholder="e.g. 600 × 400 mm flat baffle, or a 2 L closed box"
-        />
-        <TextField
-          label="Gating or windowing"
-          value={value.gating}
-          onChangeText={(gating) => onChange({ gating })}
-          testID="submit-gating"
-          placeholder="e.g. 6 ms gate above 300 Hz"
-        />
-      </FieldGrid>
+      <TextField
+        label="Baffle or enclosure"
+        value={value.baffle}
+        onChangeText={(baffle) => onChange({ baffle })}
+        testID="submit-baffle"
+        placeholder="e.g. 600 × 400 mm flat baffle, or a 2 L closed box"
+      />
+      <TextField
+        label="Gating or windowing"
+        value={value.gating}
+        onChangeText={(gating) => onChange({ gating })}
+        testID="submit-gating"
+        placeholder="e.g. 6 ms gate above 300 Hz"
+      />
       <Text style={styles.label}>Burn-in</Text>
       <ChoiceToggle
         label="Burn-in"

@@ -1,19 +1,11 @@
 import { useMemo, useState } from 'react';
 import { StyleSheet, Text, TextInput, View } from 'react-native';
 import { parseParameterText, type ParameterLine } from '../../../shared/uploads/parameter-text';
-import { displayUnits, fillParameterFields, ParameterCompletion, toDisplay, type DisplayUnit, type NumberFields, type ParameterFields } from '../../tools';
+import { displayUnits, fillParameterFields, ParameterCompletion, toDisplay, type NumberFields, type ParameterFields } from '../../tools';
 import type { DraftFile } from '../logic/draft';
-import { disagreements, limitsFromFiles } from '../logic/large-signal-from-files';
+import { disagreements, LARGE_FIELDS, limitsFromFiles, type LargeKey } from '../logic/large-signal-from-files';
 import { ActionButton, colors, FieldGrid, fonts, NumberField, radius, space } from '../../ui';
 
-export const LARGE_FIELDS: { key: 'x_bl' | 'x_c' | 'x_l' | 'bl0' | 'kms0'; label: string; unit: DisplayUnit; hint: string }[] = [
-  { key: 'x_bl', label: 'X at Bl 82 %', unit: 'mm', hint: 'one-way excursion where Bl falls to 82 % of rest' },
-  { key: 'x_c', label: 'X at compliance 75 %', unit: 'mm', hint: 'where compliance falls to 75 %' },
-  { key: 'x_l', label: 'X at Le ±10 %', unit: 'mm', hint: 'where inductance varies by 10 %' },
-  { key: 'bl0', label: 'Bl at rest', unit: 'tesla', hint: '' },
-  { key: 'kms0', label: 'Kms at rest', unit: 'nPerMm', hint: '' },
-];
-export type LargeKey = (typeof LARGE_FIELDS)[number]['key'];
 
 /** Step 4: small- and large-signal parameters, typed or pasted, checked live by the acoustics core. */
 export function ParametersStep({ small, large, files }: { small: ParameterFields; large: NumberFields<LargeKey>; files: readonly DraftFile[] }) {

@@ -1,6 +1,8 @@
 // The submission being prepared, as pure data: what each step holds, what is still wrong with it,
 // and the request body it becomes. The screens only render this and dispatch changes.
 import { normaliseSpl } from '../../../shared/acoustics/levels';
+import { readTypedNumber } from '../../../shared/input/typed-number';
+import { DISTORTION_KINDS } from '../../../shared/uploads';
 import { driverTypes, type BurnInState, type DriverType } from '../../../shared/schemas/drivers';
 import { methodSchema, submissionSchema, type SubmissionInput, type UploadMeta } from '../../../shared/schemas/submissions';
 
@@ -87,10 +89,7 @@ export const emptyDraft = (): Draft => ({
 
 /** Reads a number typed with a point or a comma; undefined for empty or not a number. */
 export function readNumber(text: string): number | undefined {
-  const t = text.trim().replace(',', '.');
-  if (t === '') return undefined;
-  const n = Number(t);
-  return Number.isFinite(n) ? n : undefined;
+  return readTypedNumber(text).value;
 }
 
 /**
@@ -144,7 +143,7 @@ export function fileMeta(f: Pick<DraftFile, 'kind' | 'angle' | 'level' | 'settin
     options.columns = { x: nums[0] - 1, y: nums[1] - 1, ...(nums[2] ? { phase: nums[2] - 1 } : {}) };
   }
   if (f.settings.xUnit !== 'auto') options.xUnit = f.settings.xUnit;
-  if (f.settings.distortionUnit !== 'auto' && ['thd', 'h2', 'h3', 'imd'].includes(f.kind)) options.distortionUnit = f.settings.distortionUnit;
+  if (f.settings.distortionUnit !== 'auto' && DISTORTION_KINDS.includes(f.kind)) options.distortionUnit = f.settings.distortionUnit;
   return {
     meta: {
       kind: f.kind,

@@ -1,9 +1,20 @@
 import { excursionLimits } from '../../../shared/acoustics/large-signal';
+import type { DisplayUnit } from '../../tools';
 import type { DraftFile } from './draft';
+
+/** The large-signal figures a reviewer gives, as the catalogue stores them. */
+export const LARGE_FIELDS: { key: 'x_bl' | 'x_c' | 'x_l' | 'bl0' | 'kms0'; label: string; unit: DisplayUnit; hint: string }[] = [
+  { key: 'x_bl', label: 'X at Bl 82 %', unit: 'mm', hint: 'one-way excursion where Bl falls to 82 % of rest' },
+  { key: 'x_c', label: 'X at compliance 75 %', unit: 'mm', hint: 'where compliance falls to 75 %' },
+  { key: 'x_l', label: 'X at Le ±10 %', unit: 'mm', hint: 'where inductance varies by 10 %' },
+  { key: 'bl0', label: 'Bl at rest', unit: 'tesla', hint: '' },
+  { key: 'kms0', label: 'Kms at rest', unit: 'nPerMm', hint: '' },
+];
+export type LargeKey = (typeof LARGE_FIELDS)[number]['key'];
 
 export interface FileLimits {
   /** SI, under the parameter names the catalogue stores. */
-  values: Partial<Record<'x_bl' | 'x_c' | 'x_l' | 'bl0' | 'kms0', number>>;
+  values: Partial<Record<LargeKey, number>>;
   /** The smallest of the limits found, m, and which curve set it. */
   xmax: { value: number; governedBy: 'Bl' | 'compliance' | 'Le' } | null;
   /** Why a file gave no limit (too narrow a range, no rest point). */
@@ -51,14 +62,13 @@ export function limitsFromFiles(files: readonly DraftFile[]): FileLimits {
 
 /** Typed values more than `tolerance` away from what the files give, as messages for the form. */
 export function disagreements(typed: FileLimits['values'], fromFiles: FileLimits['values'], tolerance = 0.1): string[] {
-  const names: Record<keyof FileLimits['values'], string> = { x_bl: 'X at Bl 82 %', x_c: 'X at compliance 75 %', x_l: 'X at Le ±10 %', bl0: 'Bl at rest', kms0: 'Kms at rest' };
   const out: string[] = [];
-  for (const k of Object.keys(names) as (keyof FileLimits['values'])[]) {
-    const a = typed[k];
-    const b = fromFiles[k];
+  for (const { key, label } of LARGE_FIELDS) {
+    const a = typed[key];
+    const b = fromFiles[key];
     if (a === undefined || b === undefined || b === 0) continue;
     const off = a / b - 1;
-    if (Math.abs(off) > tolerance) out.push(`${names[k]} typed is ${off > 0 ? '+' : ''}${(off * 100).toFixed(0)} % from the value in your curve file`);
+    if (Math.abs(off) > tolerance) out.push(`${label} typed is ${off > 0 ? '+' : ''}${(off * 100).toFixed(0)} % from the value in your curve file`);
   }
   return out;
 }

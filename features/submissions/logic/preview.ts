@@ -1,5 +1,6 @@
 import type { MeasurementSet } from '../../../shared/schemas/drivers';
-import { methodBody, splShiftDb, type Draft } from './draft';
+import { DISTORTION_KINDS } from '../../../shared/uploads';
+import { methodBody, readNumber, splShiftDb, type Draft } from './draft';
 
 /**
  * The draft as a measurement set, so the preview draws it with the same charts as a driver page.
@@ -13,12 +14,12 @@ export function previewSet(draft: Draft): MeasurementSet {
   const curves: MeasurementSet['curves'] = [];
   for (const f of draft.files) {
     if (f.status !== 'read' || !f.points) continue;
-    const angle = Number(f.angle.replace(',', '.'));
-    const level = Number(f.level.replace(',', '.'));
+    const angle = readNumber(f.angle);
+    const level = readNumber(f.level);
     curves.push({
       kind: f.kind,
-      angleDeg: f.kind === 'spl' ? (Number.isFinite(angle) ? angle : 0) : null,
-      driveLevelV: ['thd', 'h2', 'h3', 'imd'].includes(f.kind) && Number.isFinite(level) ? level : null,
+      angleDeg: f.kind === 'spl' ? (angle ?? 0) : null,
+      driveLevelV: DISTORTION_KINDS.includes(f.kind) ? (level ?? null) : null,
       x: f.points.x,
       y: f.kind === 'spl' ? f.points.y.map((v) => v + shift) : f.points.y,
       phase: f.points.phase,

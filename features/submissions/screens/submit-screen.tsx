@@ -11,11 +11,12 @@ import { DriverStep } from '../components/driver-step';
 import { FilesStep } from '../components/files-step';
 import { MethodStep } from '../components/method-step';
 import { MySubmissions } from '../components/my-submissions';
-import { LARGE_FIELDS, ParametersStep, type LargeKey } from '../components/parameters-step';
+import { ParametersStep } from '../components/parameters-step';
 import { PreviewStep } from '../components/preview-step';
 import { StepBar } from '../components/step-bar';
 import { MY_SUBMISSIONS_PATH } from '../hooks/use-my-submissions';
 import { useSubmissionDraft } from '../hooks/use-submission-draft';
+import { LARGE_FIELDS, type LargeKey } from '../logic/large-signal-from-files';
 import { buildSubmission, driverBody, fileProblems, methodBody, type ParameterValues } from '../logic/draft';
 
 interface Sent {

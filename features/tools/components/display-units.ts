@@ -1,3 +1,5 @@
+import { readTypedNumber } from '../../../shared/input/typed-number';
+
 // Inputs and results use the trade's display units; everything sent to the API is SI.
 export const displayUnits = {
   none: { symbol: '', toSi: 1 },
@@ -25,17 +27,12 @@ export const displayUnits = {
 } as const;
 export type DisplayUnit = keyof typeof displayUnits;
 
-const numberPattern = /^[+-]?(\d+\.?\d*|\.\d+)(e[+-]?\d+)?$/i;
 
-/**
- * Reads what the user typed. A decimal comma is accepted because many builders type one.
- * Empty text is "not given"; anything else that is not a plain number is a local error.
- */
+/** Reads what the user typed, in SI; text that is not a number is a local error. */
 export function parseDisplay(text: string, unit: DisplayUnit): { value?: number; error?: string } {
-  const t = text.trim().replace(',', '.');
-  if (t === '') return {};
-  if (!numberPattern.test(t)) return { error: 'enter a number' };
-  return { value: Number(t) * displayUnits[unit].toSi };
+  const r = readTypedNumber(text);
+  if (r.invalid) return { error: 'enter a number' };
+  return r.value === undefined ? {} : { value: r.value * displayUnits[unit].toSi };
 }
 
 /** Four significant figures, plain notation in the everyday range. */

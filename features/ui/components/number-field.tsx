@@ -1,5 +1,6 @@
 import { StyleSheet, Text, TextInput, View } from 'react-native';
 import { colors, fonts, radius, space } from '../theme';
+import { useInFieldGrid } from './field-grid';
 
 interface FieldProps {
   label: string;
@@ -21,9 +22,10 @@ export function TextField(props: Omit<FieldProps, 'inputMode' | 'unit'> & { unit
 }
 
 export function NumberField({ label, unit, value, onChangeText, error, placeholder, testID, inputMode = 'decimal', hint }: FieldProps) {
+  const inGrid = useInFieldGrid();
   return (
     // A long message gets the whole row rather than a tall sliver of text under a narrow box.
-    <View style={[styles.field, error && error.length > 40 ? styles.fieldWide : null]}>
+    <View style={[styles.field, inGrid && styles.cell, inGrid && error && error.length > 40 ? styles.fieldWide : null]}>
       <Text style={styles.label} nativeID={`${testID}-label`}>
         {label}
         {unit ? <Text style={styles.unit}> {unit}</Text> : null}
@@ -50,7 +52,8 @@ export function NumberField({ label, unit, value, onChangeText, error, placehold
 }
 
 const styles = StyleSheet.create({
-  field: { flexGrow: 1, flexBasis: 120, minWidth: 110, gap: 2 },
+  field: { gap: 2 },
+  cell: { flexGrow: 1, flexBasis: 120, minWidth: 110 },
   fieldWide: { flexBasis: '100%' },
   label: { fontFamily: fonts.semibold, fontSize: 13, color: colors.ink },
   unit: { fontFamily: fonts.regular, color: colors.inkSoft },
