@@ -55,11 +55,25 @@ const directives = {
   upgradeInsecureRequests: null,
 };
 
-export const securityHeaders = helmet({ contentSecurityPolicy: { directives }, crossOriginEmbedderPolicy: false });
+const hsts = helmet.strictTransportSecurity();
+
+/**
+ * Helmet's headers, with Strict-Transport-Security only on https requests (req.secure, which
+ * follows X-Forwarded-Proto when the app trusts its proxy). Browsers ignore HSTS over plain http,
+ * and a LAN install reached over http by name would otherwise be told it should be https.
+ */
+function withHttpsHsts(headers: RequestHandler): RequestHandler {
+  return (req, res, next) => headers(req, res, (err?: unknown) => (err ? next(err) : req.secure ? hsts(req, res, next) : next()));
+}
+
+export const securityHeaders = withHttpsHsts(helmet({ contentSecurityPolicy: { directives }, crossOriginEmbedderPolicy: false, strictTransportSecurity: false }));
 
 /** Embed views are meant to sit in other sites' articles, so they may be framed anywhere. */
-export const embedSecurityHeaders = helmet({
-  contentSecurityPolicy: { directives: { ...directives, frameAncestors: ['*'] } },
-  crossOriginEmbedderPolicy: false,
-  frameguard: false,
-});
+export const embedSecurityHeaders = withHttpsHsts(
+  helmet({
+    contentSecurityPolicy: { directives: { ...directives, frameAncestors: ['*'] } },
+    crossOriginEmbedderPolicy: false,
+    frameguard: false,
+    strictTransportSecurity: false,
+  }),
+);
