@@ -25,6 +25,13 @@ export interface AuthOptions {
 }
 
 export const SESSION_COOKIE = 'conestack.sid';
+/** A signed-in session lasts a month. */
+export const SESSION_MS = 30 * 86400_000;
+/**
+ * The session that carries the OAuth state to the provider and back holds nobody yet; it lasts
+ * long enough for the round trip, so abandoned sign-ins do not leave month-long rows behind.
+ */
+export const SIGN_IN_SESSION_MS = 10 * 60_000;
 
 const returnToSchema = z
   .string()
@@ -37,7 +44,7 @@ export function createAuth(db: Knex, options: AuthOptions) {
   const MySQLStore = MySQLStoreFactory(session as never);
   // The store wants a mysql-style query(sql, params) that returns a Promise of [rows, fields].
   const connection = { query: (sql: string, params: unknown[]) => db.raw(sql, params as never).then((r: unknown) => r) };
-  const store = new MySQLStore({ createDatabaseTable: false, clearExpired: false, endConnectionOnClose: false, expiration: 30 * 86400_000 }, connection as never);
+  const store = new MySQLStore({ createDatabaseTable: false, clearExpired: false, endConnectionOnClose: false, expiration: SESSION_MS }, connection as never);
   const secure = options.publicUrl.startsWith('https://');
   const sessions = session({
     name: SESSION_COOKIE,
@@ -46,7 +53,7 @@ export function createAuth(db: Knex, options: AuthOptions) {
     resave: false,
     saveUninitialized: false,
     proxy: secure,
-    cookie: { httpOnly: true, sameSite: 'lax', secure, maxAge: 30 * 86400_000 },
+    cookie: { httpOnly: true, sameSite: 'lax', secure, maxAge: SESSION_MS },
   });
   const sweep = setInterval(() => {
     void db('sessions').where('expires', '<', Math.floor(Date.now() / 1000)).delete().catch(() => undefined);
@@ -108,6 +115,8 @@ export function createAuth(db: Knex, options: AuthOptions) {
   auth.get('/auth/github', signInLimit, (req, res, next) => {
     const parsed = returnToSchema.safeParse(req.query.returnTo ?? '/');
     (req.session as unknown as { returnTo?: string }).returnTo = parsed.success ? parsed.data : '/';
+    // Someone already signed in keeps their month; the store row's expiry follows the cookie's.
+    if (!req.user) req.session.cookie.maxAge = SIGN_IN_SESSION_MS;
     // The state check needs the session saved before the browser leaves for the provider.
     req.session.save((err) => (err ? next(err) : pp.authenticate('github')(req, res, next)));
   });
@@ -120,7 +129,9 @@ export function createAuth(db: Knex, options: AuthOptions) {
         const s = req.session as unknown as { returnTo?: string };
         const to = s.returnTo ?? '/';
         delete s.returnTo;
-        res.redirect(302, to);
+        // keepSessionInfo carried the short sign-in cookie over; the known user gets the full month.
+        req.session.cookie.maxAge = SESSION_MS;
+        req.session.save((saveErr) => (saveErr ? next(saveErr) : res.redirect(302, to)));
       });
     })(req, res, next);
   });
