@@ -2,7 +2,8 @@
 // shifted levels and new invented names. Only what search reads is written (no curves).
 import type { Knex } from 'knex';
 import { computeIndexRow, type IndexRow } from '../../shared/catalogue/index-row';
-import { generateDemoCatalogue, prng, slugify } from './catalogue';
+import { slugOf } from '../../shared/catalogue/slug';
+import { generateDemoCatalogue, prng } from './catalogue';
 import { buildSet } from './build-set';
 
 const syllables = ['ka', 'lo', 'mi', 'ra', 'ven', 'tor', 'sil', 'bre', 'dun', 'ox', 'quel', 'stra', 'mon', 'ari', 'vek', 'zul'];
@@ -27,7 +28,7 @@ export async function growBenchCatalogue(db: Knex, target: number, seed = 7): Pr
       const { d, row } = base[k % base.length];
       const maker = makers[k % makers.length];
       const model = `${syllables[k % 16].toUpperCase()}${syllables[(k >> 4) % 16]}-${Math.floor(k / 256)}${d.model.split(' ')[0].slice(-3)}`;
-      drivers.push({ slug: `bench-${k}-${slugify(model)}`, maker_id: maker.id, model, type: d.type, nominal_size_in: d.nominalSizeIn, nominal_impedance_ohm: d.nominalImpedanceOhm, price: d.price, currency: 'EUR' });
+      drivers.push({ slug: `bench-${k}-${slugOf(model)}`, maker_id: maker.id, model, type: d.type, nominal_size_in: d.nominalSizeIn, nominal_impedance_ohm: d.nominalImpedanceOhm, price: d.price, currency: 'EUR' });
       extras.push({ figures: row, shift: (rnd() - 0.5) * 6 });
     }
     await db.transaction(async (trx) => {

@@ -2,6 +2,7 @@
 // seed. Nothing here describes a real product. Parameters are drawn from ranges typical of each
 // kind of driver and made self-consistent through the Thiele/Small relations before any curve is
 // computed from them.
+import { slugOf } from '../../shared/catalogue/slug';
 import type { BurnInState, DriverType } from '../../shared/schemas/drivers';
 
 export interface DemoMaker {
@@ -108,10 +109,6 @@ const surrounds = ['rubber', 'foam', 'treated cloth'];
 const magnets = ['ferrite', 'neodymium'];
 const availability: DemoDriver['availability'][] = ['in-production', 'in-production', 'in-production', 'limited', 'discontinued'];
 
-export function slugify(text: string): string {
-  return text.toLowerCase().replace(/[^a-z0-9]+/g, '-').replace(/^-|-$/g, '');
-}
-
 const round = (v: number, digits: number) => Number(v.toFixed(digits));
 
 /** The whole demo catalogue, identical on every run for a given seed. */
@@ -132,10 +129,10 @@ export function generateDemoCatalogue(seed = 20261201): DemoDriver[] {
       const materialWord = diaphragm.split(' ')[0].replace(/^\w/, (c) => c.toUpperCase()).replace('-filled', '');
       const sizeCode = t.type === 'tweeter' ? '25' : String(Math.round(t.sizeIn * 25.4 / 10) * 10);
       let model = `${maker.series}${t.type === 'tweeter' ? 'T' : ''}-${sizeCode}${String.fromCharCode(65 + (serial % 6))} ${materialWord}`;
-      let slug = `${maker.slug}-${slugify(model)}`;
+      let slug = `${maker.slug}-${slugOf(model)}`;
       while (used.has(slug)) {
         model = `${model} II`;
-        slug = `${maker.slug}-${slugify(model)}`;
+        slug = `${maker.slug}-${slugOf(model)}`;
       }
       used.add(slug);
       const outer = t.sizeIn * 0.0254 * (t.type === 'tweeter' ? 2.6 : 1.12);
@@ -180,7 +177,7 @@ export function generateDemoCatalogue(seed = 20261201): DemoDriver[] {
   // Hand-picked stories the demo shows off: a renamed driver, sample spread, burn-in, an optimistic sheet.
   const mids = drivers.filter((d) => d.type === 'mid-range' && d.nominalSizeIn === 3);
   const hero = mids[0];
-  hero.aliases.push({ kind: 'old-slug', alias: `${hero.makerSlug.split('-')[0]}-${slugify(hero.model.split(' ')[0])}` }, { kind: 'former-name', alias: `${hero.model.split(' ')[0]} Mk1` });
+  hero.aliases.push({ kind: 'old-slug', alias: `${hero.makerSlug.split('-')[0]}-${slugOf(hero.model.split(' ')[0])}` }, { kind: 'former-name', alias: `${hero.model.split(' ')[0]} Mk1` });
   drivers.forEach((d, i) => {
     if (i % 7 === 2) {
       d.sets.push({ ...d.sets[0], label: 'Sample B', sampleId: 'B', tweak: { fs: 1 + (rnd() - 0.5) * 0.08, qms: 1 + (rnd() - 0.5) * 0.16, mms: 1 + (rnd() - 0.5) * 0.04, bl: 1 + (rnd() - 0.5) * 0.04 } });

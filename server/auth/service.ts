@@ -1,4 +1,5 @@
 import { errorCodes } from '../../shared/api/errors';
+import { charCount, columnLimits, truncateChars } from '../../shared/schemas/column-limits';
 import type { Role, User } from '../../shared/schemas/users';
 import { ApiError, notFound } from '../http/api-error';
 import type { UsersRepository } from './repository';
@@ -11,11 +12,31 @@ export interface ProviderProfile {
   email: string | null;
 }
 
+const limits = columnLimits.users;
+
+/**
+ * A provider profile made to fit the users table. Providers allow longer names than we store; a
+ * shortened display name or login is still the same person, so they are cut. A shortened e-mail
+ * would be someone else's address, so an over-long one is dropped. The account id is the identity
+ * itself: one that does not fit is refused rather than cut into a possible collision.
+ */
+export function fitProfile(p: ProviderProfile): ProviderProfile {
+  if (charCount(p.id) > limits.provider_id) throw new ApiError(400, errorCodes.badRequest, `The sign-in provider sent an account id longer than ${limits.provider_id} characters`);
+  const login = truncateChars(p.login, limits.login);
+  return {
+    ...p,
+    login,
+    displayName: truncateChars(p.displayName.trim(), limits.display_name) || login,
+    email: p.email !== null && charCount(p.email) <= limits.email ? p.email : null,
+  };
+}
+
 export function createUsersService(repo: UsersRepository, options: { adminLogins?: readonly string[] } = {}) {
   const admins = new Set((options.adminLogins ?? []).map((l) => l.toLowerCase()));
   return {
     /** Finds or creates the account behind a provider profile. New accounts are members, except configured admins. */
-    async signIn(p: ProviderProfile): Promise<User> {
+    async signIn(profile: ProviderProfile): Promise<User> {
+      const p = fitProfile(profile);
       const existing = await repo.findByProvider(p.provider, p.id);
       if (existing) {
         await repo.updateProfile(existing.id, p);

@@ -1,12 +1,12 @@
 import { Router } from 'express';
 import type { Knex } from 'knex';
 import { z } from 'zod';
-import { driverDetailQuerySchema, driverListQuerySchema } from '../../shared/schemas/drivers';
+import { driverDetailQuerySchema, driverListQuerySchema, driverSlugSchema } from '../../shared/schemas/drivers';
 import { parseOr400 } from '../http/api-error';
 import { createDriversRepository } from './repository';
 import { createDriversService, type DriversServiceOptions } from './service';
 
-const slugParams = z.object({ slug: z.string().regex(/^[a-z0-9-]{1,160}$/, 'must be lower-case letters, digits and dashes') });
+const slugParams = z.object({ slug: driverSlugSchema });
 
 export function createDriversRouter(db: Knex, options: DriversServiceOptions = {}): Router {
   const service = createDriversService(createDriversRepository(db), options);

@@ -1,6 +1,79 @@
 import type { Knex } from 'knex';
-import type { NearDuplicateCandidate } from '../../shared/catalogue/near-duplicates';
+import { normaliseName, type NearDuplicateCandidate } from '../../shared/catalogue/near-duplicates';
+import { joinSlugs, slugVariant } from '../../shared/catalogue/slug';
+import { columnLimits } from '../../shared/schemas/column-limits';
 import type { MySubmission } from '../../shared/schemas/submissions';
+
+const isDuplicate = (err: unknown) => (err as { code?: string }).code === 'ER_DUP_ENTRY';
+/** A conflict the service reports as 409 naming `field`. */
+const conflict = (field: string, message: string) => Object.assign(new Error(message), { field, conflict: true });
+
+/**
+ * After a duplicate-key retry the row that won was committed after this transaction's snapshot;
+ * a locking read sees it. The first try reads plainly, so concurrent submissions do not lock gaps.
+ */
+const latest = <T extends Knex.QueryBuilder>(q: T, attempt: number): T => (attempt > 0 ? (q.forShare() as T) : q);
+
+/** The first of slug, slug-2, slug-3, … that is not in `taken`. */
+function freeSlug(base: string, taken: ReadonlySet<string>, max: number): string {
+  let slug = base;
+  for (let n = 2; taken.has(slug); n++) slug = slugVariant(base, n, max);
+  return slug;
+}
+
+/**
+ * The maker a submission names. A maker whose slug is this one (or a numbered variant of it) and
+ * whose name reads the same once case, accents, spaces and punctuation are ignored is reused; any
+ * other name gets its own maker under the next free variant, so two names that transliterate alike
+ * are never filed together.
+ */
+async function makerFor(trx: Knex.Transaction, name: string, baseSlug: string): Promise<{ id: number; slug: string }> {
+  const key = normaliseName(name);
+  for (let attempt = 0; ; attempt++) {
+    const near: { id: number; slug: string; name: string }[] = await latest(trx('makers').where('slug', baseSlug).orWhere('slug', 'like', `${baseSlug}-%`).select('id', 'slug', 'name'), attempt);
+    const same = near.find((m) => normaliseName(m.name) === key);
+    if (same) return { id: same.id, slug: same.slug };
+    const slug = freeSlug(baseSlug, new Set(near.map((m) => m.slug)), columnLimits.makers.slug);
+    try {
+      const [id] = await trx('makers').insert({ slug, name });
+      return { id, slug };
+    } catch (err) {
+      // Another submission took the slug between the read and the insert: look again.
+      if (!isDuplicate(err) || attempt >= 3) throw err;
+    }
+  }
+}
+
+/**
+ * A new driver under `maker`. The same model under the same maker is a conflict (pick the listed
+ * one); a different model whose slug comes out alike gets the next free variant. Old slugs kept as
+ * aliases count as taken, since they still lead to their driver.
+ */
+async function insertDriver(
+  trx: Knex.Transaction,
+  maker: { id: number; slug: string },
+  d: { model: string; modelSlug: string; type: string; nominalSizeIn: number; nominalImpedanceOhm: number },
+): Promise<{ id: number; slug: string }> {
+  const max = columnLimits.drivers.slug;
+  // Room for a "-999" variant, so every variant still starts with the base and the prefix search finds it.
+  const base = joinSlugs(maker.slug, d.modelSlug, max - 4);
+  for (let attempt = 0; ; attempt++) {
+    const near: { makerId: number; slug: string; model: string }[] = await latest(trx('drivers').where('slug', base).orWhere('slug', 'like', `${base}-%`).select('maker_id as makerId', 'slug', 'model'), attempt);
+    if (near.some((n) => n.makerId === maker.id && normaliseName(n.model) === normaliseName(d.model))) {
+      throw conflict('driver.model', 'this maker already has a driver with that model; pick it instead');
+    }
+    const aliases: { slug: string }[] = await trx('driver_aliases').where('slug', base).orWhere('slug', 'like', `${base}-%`).select('slug');
+    const slug = freeSlug(base, new Set([...near, ...aliases].map((n) => n.slug)), max);
+    try {
+      const [id] = await trx('drivers').insert({
+        slug, maker_id: maker.id, model: d.model, type: d.type, nominal_size_in: d.nominalSizeIn, nominal_impedance_ohm: d.nominalImpedanceOhm,
+      });
+      return { id, slug };
+    } catch (err) {
+      if (!isDuplicate(err) || attempt >= 3) throw err;
+    }
+  }
+}
 
 export function createSubmissionsRepository(db: Knex) {
   return {
@@ -31,12 +104,17 @@ export function createSubmissionsRepository(db: Knex) {
       }[];
     },
 
-    /** Creates (or finds) the driver and the pending set, inside the caller's transaction. */
+    /**
+     * Creates the pending set, inside the caller's transaction, for a driver the submitter may see
+     * or for a new one under its maker. `makerSlug` and `modelSlug` are already non-empty.
+     */
     async createPendingSet(
       trx: Knex.Transaction,
       s: {
-        driver: { slug: string } | { makerName: string; model: string; type: string; nominalSizeIn: number; nominalImpedanceOhm: number };
+        driver: { slug: string } | { makerName: string; makerSlug: string; model: string; modelSlug: string; type: string; nominalSizeIn: number; nominalImpedanceOhm: number };
         userId: number;
+        /** Moderators may add sets to entries still waiting for approval; others only to their own. */
+        seesPending: boolean;
         method: Record<string, unknown>;
         anglesDeg: number[];
         normalisation: unknown;
@@ -45,18 +123,20 @@ export function createSubmissionsRepository(db: Knex) {
       let driverId: number;
       let driverSlug: string;
       if ('slug' in s.driver) {
-        const d = await trx('drivers').where({ slug: s.driver.slug }).first('id', 'slug');
+        const d = await trx('drivers as d').where({ 'd.slug': s.driver.slug })
+          .where((q) => {
+            if (s.seesPending) return;
+            void q.whereExists(trx('measurement_sets as s').whereRaw('s.driver_id = d.id').where((w) => void w.where('s.status', 'approved').orWhere('s.submitted_by', s.userId)));
+          })
+          .first('d.id', 'd.slug');
         if (!d) throw Object.assign(new Error('no driver has this slug'), { field: 'driver.slug' });
         driverId = d.id;
         driverSlug = d.slug;
       } else {
-        const makerSlug = s.driver.makerName.toLowerCase().replace(/[^a-z0-9]+/g, '-').replace(/^-|-$/g, '');
-        await trx('makers').insert({ slug: makerSlug, name: s.driver.makerName }).onConflict('slug').ignore();
-        const maker = await trx('makers').where({ slug: makerSlug }).first('id');
-        driverSlug = `${makerSlug}-${s.driver.model.toLowerCase().replace(/[^a-z0-9]+/g, '-').replace(/^-|-$/g, '')}`;
-        [driverId] = await trx('drivers').insert({
-          slug: driverSlug, maker_id: maker.id, model: s.driver.model, type: s.driver.type, nominal_size_in: s.driver.nominalSizeIn, nominal_impedance_ohm: s.driver.nominalImpedanceOhm,
-        });
+        const maker = await makerFor(trx, s.driver.makerName, s.driver.makerSlug);
+        const created = await insertDriver(trx, maker, s.driver);
+        driverId = created.id;
+        driverSlug = created.slug;
       }
       const m = s.method;
       const [setId] = await trx('measurement_sets').insert({
@@ -83,19 +163,21 @@ export function createSubmissionsRepository(db: Knex) {
      * name, aliases and status only: no curves, parameters or figures. The catalogue is small (tens
      * of drivers), so the fuzzy comparison runs in memory rather than behind a SQL prefilter.
      */
-    async nearDuplicateCandidates(): Promise<NearDuplicateCandidate[]> {
-      const rows: { id: number; slug: string; model: string; makerName: string; listed: number | string }[] = await db('drivers as d')
+    async nearDuplicateCandidates(userId: number): Promise<(NearDuplicateCandidate & { submittedByUser: boolean })[]> {
+      const rows: { id: number; slug: string; model: string; makerName: string; listed: number | string; mine: number | string }[] = await db('drivers as d')
         .join('makers as m', 'm.id', 'd.maker_id')
         .orderBy('d.id')
         .select('d.id', 'd.slug', 'd.model', 'm.name as makerName')
         // A driver created by a submission stays pending until a moderator approves one of its sets.
-        .select(db.raw('exists (select 1 from measurement_sets s where s.driver_id = d.id and s.status = ?) as listed', ['approved']));
+        .select(db.raw('exists (select 1 from measurement_sets s where s.driver_id = d.id and s.status = ?) as listed', ['approved']))
+        .select(db.raw('exists (select 1 from measurement_sets s where s.driver_id = d.id and s.submitted_by = ?) as mine', [userId]));
       const aliases: { driverId: number; alias: string }[] = await db('driver_aliases').orderBy('id').select('driver_id as driverId', 'alias');
       const byDriver = new Map<number, string[]>();
       for (const a of aliases) byDriver.set(a.driverId, [...(byDriver.get(a.driverId) ?? []), a.alias]);
       return rows.map((r) => ({
         id: r.id, slug: r.slug, model: r.model, makerName: r.makerName, aliases: byDriver.get(r.id) ?? [],
         status: Number(r.listed) ? 'listed' : 'pending',
+        submittedByUser: Boolean(Number(r.mine)),
       }));
     },
 

@@ -61,7 +61,7 @@ export function createSubmissionsRouter(db: Knex): Router {
     res.json({ submissions: await service.mine(currentUser(req) as User) });
   });
   router.get('/submissions/near-duplicates', reviewer, async (req, res) => {
-    res.json(await service.nearDuplicates(parseOr400(nearDuplicateQuerySchema, req.query, 'query')));
+    res.json(await service.nearDuplicates(currentUser(req) as User, parseOr400(nearDuplicateQuerySchema, req.query, 'query')));
   });
   return router;
 }

@@ -4,9 +4,11 @@ import { normaliseSpl } from '../../shared/acoustics/levels';
 import { parameterUnit } from '../../shared/catalogue/parameter-units';
 import { errorCodes } from '../../shared/api/errors';
 import { findNearDuplicates } from '../../shared/catalogue/near-duplicates';
+import { slugOf } from '../../shared/catalogue/slug';
+import { charCount, columnLimits } from '../../shared/schemas/column-limits';
 import type { NearDuplicateQuery, NearDuplicatesResponse, UploadMeta } from '../../shared/schemas/submissions';
 import type { submissionSchema } from '../../shared/schemas/submissions';
-import type { User } from '../../shared/schemas/users';
+import { roleAtLeast, type User } from '../../shared/schemas/users';
 import { ACOUSTIC_KINDS, parseMeasurementFile, type CurveKind, type ParseResult } from '../../shared/uploads';
 import type { z } from 'zod';
 import { ApiError, notFound } from '../http/api-error';
@@ -57,6 +59,31 @@ export function normaliseUpload(u: StoredUpload, splShift: number): NormalisedCu
   return { kind: u.kind, angleDeg: u.kind === 'spl' ? (u.angleDeg ?? 0) : u.angleDeg, driveLevelV: u.driveLevelV, x, y, phase: p.phase ? ph : null };
 }
 
+// Four characters spare for a numbered variant ("-2" … "-999") when the slug is taken.
+const MAKER_SLUG_BASE = columnLimits.makers.slug - 4;
+
+/** The new driver with its maker and model slugs, or a 400 naming the name that has no letter or digit. */
+function withSlugs<D extends { makerName: string; model: string }>(d: D): D & { makerSlug: string; modelSlug: string } {
+  const makerSlug = slugOf(d.makerName, MAKER_SLUG_BASE);
+  const modelSlug = slugOf(d.model, columnLimits.drivers.slug);
+  const fields = [
+    ...(makerSlug ? [] : [{ field: 'driver.makerName', message: 'needs at least one letter or digit' }]),
+    ...(modelSlug ? [] : [{ field: 'driver.model', message: 'needs at least one letter or digit' }]),
+  ];
+  if (fields.length) throw new ApiError(400, errorCodes.validation, `Invalid body: ${fields.map((f) => `${f.field}: ${f.message}`).join('; ')}`, { fields });
+  return { ...d, makerSlug, modelSlug };
+}
+
+const FILE_NAME_MAX = columnLimits.upload_files.file_name;
+
+/** Refuses file names longer than the stored column, naming each such file by its place and a shortened name. */
+function checkFileNames(files: readonly UploadedFile[]): void {
+  const fields = files.flatMap((f, i) =>
+    charCount(f.originalname) > FILE_NAME_MAX ? [{ field: `files.${i}`, message: `"${Array.from(f.originalname).slice(0, 40).join('')}…": file name longer than ${FILE_NAME_MAX} characters; rename the file` }] : [],
+  );
+  if (fields.length) throw new ApiError(400, errorCodes.validation, fields.map((f) => `${f.field}: ${f.message}`).join('; '), { fields });
+}
+
 export function createSubmissionsService(repo: SubmissionsRepository) {
   return {
     /** Reads each file, stages the ones that parse (bytes kept) and reports each file on its own. */
@@ -64,6 +91,7 @@ export function createSubmissionsService(repo: SubmissionsRepository) {
       if (files.length !== meta.length) {
         throw new ApiError(400, errorCodes.validation, `meta describes ${meta.length} files but ${files.length} were sent`, { fields: [{ field: 'meta', message: 'one entry per file' }] });
       }
+      checkFileNames(files);
       await repo.dropStaleUploads(user.id, STAGED_UPLOAD_HOURS);
       const out = [];
       for (const [i, f] of files.entries()) {
@@ -85,6 +113,7 @@ export function createSubmissionsService(repo: SubmissionsRepository) {
      * 2.83 V / 1 m from the declared drive and distance, and writes everything in one transaction.
      */
     async submit(user: User, input: z.infer<typeof submissionSchema>) {
+      const driver = 'slug' in input.driver ? input.driver : withSlugs(input.driver);
       try {
         return await repo.transaction(async (trx) => {
           // In the order the reviewer listed them, so messages and curves follow that order, not the table's.
@@ -109,7 +138,7 @@ export function createSubmissionsService(repo: SubmissionsRepository) {
           const { driveVoltageV, distanceM } = input.method;
           const plan = normalisationPlan(driveVoltageV, distanceM);
           const anglesDeg = [...new Set(staged.filter((u) => u.kind === 'spl').map((u) => u.angleDeg ?? 0))];
-          const created = await repo.createPendingSet(trx, { driver: input.driver, userId: user.id, method: { ...input.method, reviewer: user.displayName }, anglesDeg, normalisation: plan.record });
+          const created = await repo.createPendingSet(trx, { driver, userId: user.id, seesPending: roleAtLeast(user.role, 'moderator'), method: { ...input.method, reviewer: user.displayName }, anglesDeg, normalisation: plan.record });
           // Each original is read again from its stored bytes, so what lands is exactly what can be re-run.
           for (const u of staged) {
             const curve = normaliseUpload(u, plan.splShift);
@@ -122,7 +151,8 @@ export function createSubmissionsService(repo: SubmissionsRepository) {
         });
       } catch (err) {
         if (err instanceof ApiError) throw err;
-        const e = err as { code?: string; field?: string; message?: string };
+        const e = err as { code?: string; field?: string; message?: string; conflict?: boolean };
+        if (e.conflict && e.field) throw new ApiError(409, errorCodes.conflict, `${e.field}: ${e.message}`, { fields: [{ field: e.field, message: e.message ?? 'already listed' }] });
         if (e.code === 'ER_DUP_ENTRY') throw new ApiError(409, errorCodes.conflict, 'A driver with that maker and model already exists; pick it instead', { fields: [{ field: 'driver', message: 'already listed' }] });
         if (e.field) throw new ApiError(400, errorCodes.validation, `${e.field}: ${e.message}`, { fields: [{ field: e.field, message: e.message ?? 'invalid' }] });
         throw err;
@@ -154,8 +184,13 @@ export function createSubmissionsService(repo: SubmissionsRepository) {
     },
 
     /** Entries that may already be the driver a reviewer is about to create, strongest first. */
-    async nearDuplicates(input: NearDuplicateQuery): Promise<NearDuplicatesResponse> {
-      return { candidates: findNearDuplicates(input, await repo.nearDuplicateCandidates()) };
+    async nearDuplicates(user: User, input: NearDuplicateQuery): Promise<NearDuplicatesResponse> {
+      const seesPending = roleAtLeast(user.role, 'moderator');
+      // Pending entries are private to their submitters and the moderators until approved.
+      const visible = (await repo.nearDuplicateCandidates(user.id))
+        .filter((c) => c.status === 'listed' || seesPending || c.submittedByUser)
+        .map(({ submittedByUser: _mine, ...c }) => c);
+      return { candidates: findNearDuplicates(input, visible) };
     },
   };
 }

@@ -1,10 +1,11 @@
 import { findNearDuplicates, normaliseName, type NearDuplicateCandidate } from './near-duplicates';
+import { slugOf } from './slug';
 
 // Every maker and model here is invented.
 let nextId = 1;
 const driver = (makerName: string, model: string, extra: Partial<NearDuplicateCandidate> = {}): NearDuplicateCandidate => ({
   id: nextId++,
-  slug: `${makerName}-${model}`.toLowerCase().replace(/[^a-z0-9]+/g, '-'),
+  slug: slugOf(`${makerName} ${model}`),
   makerName,
   model,
   aliases: [],

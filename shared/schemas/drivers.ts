@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { columnLimits } from './column-limits';
 
 export const driverTypes = ['woofer', 'mid-woofer', 'mid-range', 'tweeter', 'full-range', 'subwoofer'] as const;
 export const driverTypeSchema = z.enum(driverTypes);
@@ -19,6 +20,13 @@ export type BurnInState = z.infer<typeof burnInSchema>;
 
 export const availabilityStates = ['in-production', 'limited', 'discontinued'] as const;
 export const availabilitySchema = z.enum(availabilityStates);
+
+/** A driver's address: lower-case letters, digits and dashes, as long as the column allows. */
+export const driverSlugSchema = z
+  .string()
+  .min(1, 'must be a driver slug')
+  .max(columnLimits.drivers.slug, `must be at most ${columnLimits.drivers.slug} characters`)
+  .regex(/^[a-z0-9-]+$/, 'must be lower-case letters, digits and dashes');
 
 export const makerSchema = z.object({ slug: z.string(), name: z.string() });
 

@@ -1,9 +1,10 @@
 import { z } from 'zod';
-import { derivedFiguresSchema, driverIdentitySchema, measurementSetSchema, parameterSchema } from './drivers';
+import { columnLimits, columnText } from './column-limits';
+import { derivedFiguresSchema, driverIdentitySchema, driverSlugSchema, measurementSetSchema, parameterSchema } from './drivers';
 
 export const MAX_STACK = 4;
 
-const slug = z.string().regex(/^[a-z0-9-]{1,160}$/, 'must be a driver slug');
+const slug = driverSlugSchema;
 
 /** `drivers=a,b` and `sets=12,,15` (an empty place means the driver's first set). */
 export const overlayQuerySchema = z
@@ -74,7 +75,7 @@ export type OverlayOptions = z.infer<typeof overlayOptionsSchema>;
 
 export const saveOverlaySchema = z
   .object({
-    title: z.string().trim().min(1, 'give the comparison a title').max(120),
+    title: columnText(columnLimits.saved_overlays.title).min(1, 'give the comparison a title'),
     note: z.string().trim().max(2000).default(''),
     entries: z
       .array(z.object({ slug, setId: z.number().int().positive().nullable().default(null) }).strict())

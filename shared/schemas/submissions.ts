@@ -1,6 +1,9 @@
 import { z } from 'zod';
 import type { NearDuplicate } from '../catalogue/near-duplicates';
-import { burnInSchema, curveKindSchema, driverTypeSchema } from './drivers';
+import { columnLimits, columnText } from './column-limits';
+import { burnInSchema, curveKindSchema, driverSlugSchema, driverTypeSchema } from './drivers';
+
+const sets = columnLimits.measurement_sets;
 
 /** One entry per uploaded file, in the same order as the files, sent as the `meta` form field. */
 export const uploadMetaSchema = z.array(
@@ -26,24 +29,24 @@ export const methodSchema = z
   .object({
     driveVoltageV: z.number().positive().max(100),
     distanceM: z.number().positive().max(20),
-    baffle: z.string().trim().min(1, 'describe the baffle or enclosure').max(200),
-    gating: z.string().trim().max(200).nullable().default(null),
+    baffle: columnText(sets.baffle).min(1, 'describe the baffle or enclosure'),
+    gating: columnText(sets.gating).nullable().default(null),
     temperatureC: z.number().min(-30).max(60).nullable().default(null),
     measuredOn: z.iso.date().nullable().default(null),
-    sampleId: z.string().trim().max(80).nullable().default(null),
+    sampleId: columnText(sets.sample_id).nullable().default(null),
     burnIn: burnInSchema.default('out-of-box'),
-    label: z.string().trim().max(200).default('Submitted set'),
+    label: columnText(sets.label).default('Submitted set'),
   })
   .strict();
 
 export const submissionSchema = z
   .object({
     driver: z.union([
-      z.object({ slug: z.string().regex(/^[a-z0-9-]{1,160}$/) }).strict(),
+      z.object({ slug: driverSlugSchema }).strict(),
       z
         .object({
-          makerName: z.string().trim().min(2).max(200),
-          model: z.string().trim().min(1).max(200),
+          makerName: columnText(columnLimits.makers.name).min(2),
+          model: columnText(columnLimits.drivers.model).min(1),
           type: driverTypeSchema,
           nominalSizeIn: z.number().positive().max(30),
           nominalImpedanceOhm: z.number().positive().max(100),
@@ -53,7 +56,7 @@ export const submissionSchema = z
     method: methodSchema,
     uploads: z.array(z.string().regex(/^[a-f0-9]{32}$/, 'not an upload token')).min(1, 'upload at least one curve').max(60),
     parameters: z
-      .array(z.object({ name: z.string().regex(/^[a-z0-9_]{1,40}$/), value: z.number().finite(), signal: z.enum(['small', 'large']).default('small') }).strict())
+      .array(z.object({ name: z.string().max(columnLimits.parameters.name).regex(/^[a-z0-9_]+$/), value: z.number().finite(), signal: z.enum(['small', 'large']).default('small') }).strict())
       .max(60)
       .default([])
       .refine((ps) => new Set(ps.map((p) => p.name)).size === ps.length, 'each parameter may appear once'),
@@ -64,8 +67,8 @@ export type SubmissionInput = z.input<typeof submissionSchema>;
 /** `GET /api/submissions/near-duplicates`: the maker and model a reviewer is about to enter. */
 export const nearDuplicateQuerySchema = z
   .object({
-    makerName: z.string().trim().min(1, 'name the maker').max(200),
-    model: z.string().trim().min(1, 'name the model').max(200),
+    makerName: columnText(columnLimits.makers.name).min(1, 'name the maker'),
+    model: columnText(columnLimits.drivers.model).min(1, 'name the model'),
   })
   .strict();
 export type NearDuplicateQuery = z.infer<typeof nearDuplicateQuerySchema>;

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { columnLimits, columnText } from './column-limits';
 
 /** Ordered from least to most trusted; each role can do everything the ones before it can. */
 export const roles = ['visitor', 'member', 'reviewer', 'moderator', 'admin'] as const;
@@ -18,7 +19,7 @@ export const userSchema = z.object({
 });
 export type User = z.infer<typeof userSchema>;
 
-export const roleChangeSchema = z.object({ role: roleSchema, reason: z.string().trim().max(200).optional() }).strict();
+export const roleChangeSchema = z.object({ role: roleSchema, reason: columnText(columnLimits.role_audit.reason).optional() }).strict();
 
 export const auditEntrySchema = z.object({
   id: z.number().int(),

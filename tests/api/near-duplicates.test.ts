@@ -8,6 +8,7 @@ describe('near-duplicate check for new driver entries', () => {
   let server: Awaited<ReturnType<typeof startTestServer>>;
   let reviewer = '';
   let member = '';
+  let moderator = '';
   let pendingId = 0;
 
   const cleanup = () => removePrefixed(db, P);
@@ -20,7 +21,9 @@ describe('near-duplicate check for new driver entries', () => {
     server = await startTestServer(db);
     reviewer = (await signIn(server.url, `${P}-reviewer`)).cookie;
     member = (await signIn(server.url, `${P}-member`)).cookie;
+    moderator = (await signIn(server.url, `${P}-moderator`)).cookie;
     await db('users').where({ login: `${P}-reviewer` }).update({ role: 'reviewer' });
+    await db('users').where({ login: `${P}-moderator` }).update({ role: 'moderator' });
   });
   afterAll(async () => {
     await server.close();
@@ -54,11 +57,14 @@ describe('near-duplicate check for new driver entries', () => {
     expect(candidates[0].strength).toBe('strong');
   });
 
-  it('returns a driver without an approved set as pending', async () => {
-    const res = await check({ makerName: 'neardup pending works', model: 'nd77pending' }, reviewer);
+  it('returns a driver without an approved set as pending to a moderator, and to no other reviewer', async () => {
+    const query = { makerName: 'neardup pending works', model: 'nd77pending' };
+    const res = await check(query, moderator);
     expect(res.status).toBe(200);
     const { candidates } = await res.json();
     expect(candidates.find((c: { id: number }) => c.id === pendingId)).toMatchObject({ status: 'pending', strength: 'strong' });
+    const other = await (await check(query, reviewer)).json();
+    expect(other.candidates.map((c: { id: number }) => c.id)).not.toContain(pendingId);
   });
 
   it('finds nothing for an unrelated name', async () => {

@@ -1,5 +1,6 @@
 import type { Knex } from 'knex';
 import { refreshDriverFigures } from '../../server/drivers/figures-repository';
+import { slugOf } from '../../shared/catalogue/slug';
 
 /** A 1/24-octave grid from 20 Hz to 20 kHz: fine enough for band means, small enough to read. */
 export const fixtureGrid = Array.from({ length: 24 * 10 + 1 }, (_, i) => Number((20 * 2 ** (i / 24)).toFixed(4)));
@@ -28,7 +29,7 @@ export async function insertFixtureCatalogue(db: Knex, prefix: string, drivers: 
   const [makerId] = await db('makers').insert({ slug: `${prefix}-maker`, name: `Fixture Maker ${prefix}` });
   const out: { id: number; slug: string; setId: number }[] = [];
   for (const d of drivers) {
-    const slug = `${prefix}-${d.model.toLowerCase().replace(/[^a-z0-9]+/g, '-')}`;
+    const slug = `${prefix}-${slugOf(d.model)}`;
     const [id] = await db('drivers').insert({
       slug, maker_id: makerId, model: d.model, type: d.type ?? 'mid-range', nominal_size_in: d.sizeIn ?? 3, nominal_impedance_ohm: d.impedance ?? 4,
       price: 50, currency: 'EUR',

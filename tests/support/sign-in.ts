@@ -23,12 +23,15 @@ export async function startTestServer(db: Knex, options: Partial<AppOptions> = {
 
 const cookieOf = (res: Response): string | undefined => res.headers.getSetCookie().map((c) => c.split(';')[0]).find((c) => c.startsWith('conestack.sid='));
 
-/** Walks the whole OAuth dance against the fake provider and returns the session cookie. */
-export async function signIn(url: string, login: string, returnTo = '/'): Promise<{ cookie: string; location: string }> {
+/**
+ * Walks the whole OAuth dance against the fake provider and returns the session cookie. `profile`
+ * sets the display name and e-mail the provider reports for an account it has not seen yet.
+ */
+export async function signIn(url: string, login: string, returnTo = '/', profile: { name?: string; email?: string } = {}): Promise<{ cookie: string; location: string }> {
   const start = await fetch(`${url}/auth/github?returnTo=${encodeURIComponent(returnTo)}`, { redirect: 'manual' });
   const preCookie = cookieOf(start);
   const authorize = new URL(start.headers.get('location') as string, url);
-  const form = new URLSearchParams({ login, redirect_uri: authorize.searchParams.get('redirect_uri') as string, state: authorize.searchParams.get('state') ?? '' });
+  const form = new URLSearchParams({ login, redirect_uri: authorize.searchParams.get('redirect_uri') as string, state: authorize.searchParams.get('state') ?? '', ...profile });
   const granted = await fetch(authorize, { method: 'POST', body: form, redirect: 'manual', headers: { origin: url } });
   const callback = granted.headers.get('location') as string;
   const back = await fetch(callback, { redirect: 'manual', headers: preCookie ? { cookie: preCookie } : {} });

@@ -1,4 +1,4 @@
-import { buildSubmission, emptyDraft, extraHarmonics, fileMeta, fileProblems, guessFileMeta, methodBody, readNumber, splShiftDb, type Draft, type DraftFile } from './draft';
+import { buildSubmission, driverBody, emptyDraft, extraHarmonics, fileMeta, fileProblems, guessFileMeta, methodBody, readNumber, splShiftDb, type Draft, type DraftFile } from './draft';
 
 const file = (over: Partial<DraftFile>): DraftFile => ({
   id: over.name ?? 'f',
@@ -80,6 +80,20 @@ describe('methodBody', () => {
     const r = methodBody({ ...emptyDraft().method, distance: '25', baffle: 'b' });
     expect(r.ok).toBe(false);
     if (!r.ok) expect(r.problems[0]).toMatch(/^Distance:/);
+  });
+});
+
+describe('driverBody', () => {
+  // Invented names; the limits come from the column table the server shares.
+  const entry = (makerName: string, model: string) => ({ mode: 'new' as const, makerName, model, type: 'mid-range' as const, size: '3', impedance: '4' });
+
+  it('takes names in any script', () => {
+    expect(driverBody(entry('日本音響', 'NA-10'))).toMatchObject({ ok: true, value: { makerName: '日本音響', model: 'NA-10' } });
+  });
+
+  it('names a maker or model the server would refuse before it is sent', () => {
+    expect(driverBody(entry('!!', '—'))).toEqual({ ok: false, problems: ['Maker: at least two characters, with a letter or digit', 'Model: required, with a letter or digit'] });
+    expect(driverBody(entry('M'.repeat(201), 'X'.repeat(201)))).toEqual({ ok: false, problems: ['Maker: at most 200 characters', 'Model: at most 200 characters'] });
   });
 });
 

@@ -3,6 +3,7 @@
 import { normaliseSpl } from '../../../shared/acoustics/levels';
 import { readTypedNumber } from '../../../shared/input/typed-number';
 import { DISTORTION_KINDS } from '../../../shared/uploads';
+import { columnLimits } from '../../../shared/schemas/column-limits';
 import { driverTypes, type BurnInState, type DriverType } from '../../../shared/schemas/drivers';
 import { methodSchema, submissionSchema, type SubmissionInput, type UploadMeta } from '../../../shared/schemas/submissions';
 
@@ -191,8 +192,14 @@ export function methodBody(m: MethodText): { ok: true; value: SubmissionInput['m
 export function driverBody(d: DriverChoice): { ok: true; value: SubmissionInput['driver'] } | { ok: false; problems: string[] } {
   if (d.mode === 'existing') return d.slug ? { ok: true, value: { slug: d.slug } } : { ok: false, problems: ['Pick a driver from the catalogue'] };
   const problems: string[] = [];
-  if (d.makerName.trim().length < 2) problems.push('Maker: at least two letters');
-  if (!d.model.trim()) problems.push('Model: required');
+  // The server makes the address from these names, so each needs a letter or digit in some script.
+  const named = (s: string) => /[\p{L}\p{N}]/u.test(s);
+  const maker = d.makerName.trim();
+  const model = d.model.trim();
+  if (maker.length < 2 || !named(maker)) problems.push('Maker: at least two characters, with a letter or digit');
+  else if (maker.length > columnLimits.makers.name) problems.push(`Maker: at most ${columnLimits.makers.name} characters`);
+  if (!model || !named(model)) problems.push('Model: required, with a letter or digit');
+  else if (model.length > columnLimits.drivers.model) problems.push(`Model: at most ${columnLimits.drivers.model} characters`);
   if (!driverTypes.includes(d.type)) problems.push('Type: pick one');
   const size = readNumber(d.size);
   const impedance = readNumber(d.impedance);
