@@ -155,6 +155,15 @@ export function createDriversRepository(db: Knex) {
       return id === undefined ? undefined : this.canonicalById(id);
     },
 
+    /** Listed: at least one set a moderator has approved. Until then the entry is pending. */
+    async hasApprovedSet(driverId: number): Promise<boolean> {
+      return Boolean(await db('measurement_sets').where({ driver_id: driverId, status: 'approved' }).first('id'));
+    },
+
+    async hasSetSubmittedBy(driverId: number, userId: number): Promise<boolean> {
+      return Boolean(await db('measurement_sets').where({ driver_id: driverId, submitted_by: userId }).first('id'));
+    },
+
     /** Sensitivity at the type's reference band, as search shows it. */
     async listedSensitivity(driverId: number): Promise<number | null> {
       return (await db('driver_figures').where({ driver_id: driverId }).first('sensitivity_db'))?.sensitivity_db ?? null;

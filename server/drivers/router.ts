@@ -3,8 +3,9 @@ import type { Knex } from 'knex';
 import { z } from 'zod';
 import { driverDetailQuerySchema, driverListQuerySchema, driverSlugSchema } from '../../shared/schemas/drivers';
 import { parseOr400 } from '../http/api-error';
+import { currentUser } from '../http/require-role';
 import { createDriversRepository } from './repository';
-import { createDriversService, type DriversServiceOptions } from './service';
+import { createDriversService, viewerOf, type DriversServiceOptions } from './service';
 
 const slugParams = z.object({ slug: driverSlugSchema });
 
@@ -18,7 +19,7 @@ export function createDriversRouter(db: Knex, options: DriversServiceOptions = {
     const { slug } = parseOr400(slugParams, req.params, 'params');
     const q = parseOr400(driverDetailQuerySchema, req.query, 'query');
     const band = q.bandLo !== undefined && q.bandHi !== undefined && q.bandHi > q.bandLo ? { lo: q.bandLo, hi: q.bandHi } : undefined;
-    res.json(await service.get(slug, band));
+    res.json(await service.get(slug, band, viewerOf(currentUser(req))));
   });
   return router;
 }

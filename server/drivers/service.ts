@@ -1,6 +1,7 @@
 import { computeDerivedFigures } from '../../shared/catalogue/derived-figures';
 import type { DriverDetail, DriverIdentity, DriverListQuery, DriverListResponse } from '../../shared/schemas/drivers';
 import { availabilitySchema, referenceBandFor } from '../../shared/schemas/drivers';
+import { roleAtLeast, type User } from '../../shared/schemas/users';
 import { notFound } from '../http/api-error';
 import type { DriverRow, DriversRepository } from './repository';
 import { SearchIndex } from './search-index';
@@ -25,6 +26,23 @@ export function driverIdentity(row: DriverRow, requestedSlug: string): DriverIde
   };
 }
 
+/** Who is asking, as far as pending entries go: moderators see them all, others those they submitted to. */
+export interface Viewer {
+  userId: number | null;
+  seesPending: boolean;
+}
+
+export function viewerOf(user: User | null): Viewer {
+  return { userId: user?.id ?? null, seesPending: user !== null && roleAtLeast(user.role, 'moderator') };
+}
+
+/**
+ * Whether a driver with no approved set may be shown: a pending entry's name and maker stay with
+ * its submitters and the moderators until one of its sets is approved.
+ */
+export async function maySeePending(repo: Pick<DriversRepository, 'hasSetSubmittedBy'>, driverId: number, viewer: Viewer): Promise<boolean> {
+  return viewer.seesPending || (viewer.userId !== null && (await repo.hasSetSubmittedBy(driverId, viewer.userId)));
+}
 
 export function createDriversService(repo: DriversRepository, options: DriversServiceOptions = {}) {
   const staleAfterMs = options.staleAfterMs ?? 2000;
@@ -65,10 +83,12 @@ export function createDriversService(repo: DriversRepository, options: DriversSe
       checkedAt = 0;
     },
 
-    async get(slug: string, band?: { lo: number; hi: number }): Promise<DriverDetail> {
+    async get(slug: string, band: { lo: number; hi: number } | undefined, viewer: Viewer): Promise<DriverDetail> {
       const row = await repo.resolveSlug(slug);
       if (!row) throw notFound(`Driver "${slug}"`);
       const sets = await repo.setsForDriver(row.id);
+      // The same answer as for a slug nobody uses, so a pending entry's existence does not show either.
+      if (sets.length === 0 && !(await maySeePending(repo, row.id, viewer))) throw notFound(`Driver "${slug}"`);
       const setIds = sets.map((s) => s.id);
       const [params, curves, aliases, mounting, makerSpecs, sensitivityDb] = await Promise.all([
         repo.parametersForSets(setIds),

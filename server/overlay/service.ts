@@ -45,9 +45,11 @@ export interface OverlayServiceOptions {
 export function createOverlayService(drivers: DriversRepository, repo: OverlayRepository, options: OverlayServiceOptions = {}) {
   async function one(slug: string, setId: number | null, band: { lo: number; hi: number } | null, place: number): Promise<OverlayDriver> {
     const row = await drivers.resolveSlug(slug);
-    if (!row) throw new ApiError(404, errorCodes.notFound, `Driver "${slug}" was not found`, { fields: [{ field: `drivers.${place}`, message: 'no such driver' }] });
-    const sets = await drivers.setsForDriver(row.id);
-    if (sets.length === 0) throw new ApiError(404, errorCodes.notFound, `Driver "${slug}" has no approved measurements yet`);
+    const sets = row ? await drivers.setsForDriver(row.id) : [];
+    // One answer for both, so a comparison never tells whether a pending entry exists.
+    if (!row || sets.length === 0) {
+      throw new ApiError(404, errorCodes.notFound, `Driver "${slug}" was not found or has no approved measurements yet`, { fields: [{ field: `drivers.${place}`, message: 'no such listed driver' }] });
+    }
     const set = setId === null ? sets[0] : sets.find((s) => s.id === setId);
     if (!set) throw new ApiError(400, errorCodes.validation, `Set ${setId} is not an approved set of "${slug}"`, { fields: [{ field: `sets.${place}`, message: 'not a set of this driver' }] });
     const [params, curves] = await Promise.all([drivers.parametersForSets([set.id]), drivers.curvesForSets([set.id])]);
@@ -125,7 +127,10 @@ export function createOverlayService(drivers: DriversRepository, repo: OverlayRe
       const entries: { driverId: number; setId: number | null }[] = [];
       for (const [i, e] of input.entries.entries()) {
         const row = await drivers.resolveSlug(e.slug);
-        if (!row) throw new ApiError(400, errorCodes.validation, `Driver "${e.slug}" was not found`, { fields: [{ field: `entries.${i}.slug`, message: 'no such driver' }] });
+        // A saved link is public, and its slugs name maker and model: only listed drivers go in.
+        if (!row || !(await drivers.hasApprovedSet(row.id))) {
+          throw new ApiError(400, errorCodes.validation, `Driver "${e.slug}" was not found`, { fields: [{ field: `entries.${i}.slug`, message: 'no such driver' }] });
+        }
         if (e.setId !== null && !(await repo.setBelongsTo(e.setId, row.id))) {
           throw new ApiError(400, errorCodes.validation, `Set ${e.setId} is not an approved set of "${e.slug}"`, { fields: [{ field: `entries.${i}.setId`, message: 'not a set of this driver' }] });
         }
@@ -151,7 +156,7 @@ export function createOverlayService(drivers: DriversRepository, repo: OverlayRe
         // A set follows its driver through a merge; use wherever the set now lives.
         const driverId = e.setId !== null ? ((await repo.driverOfSet(e.setId)) ?? e.driverId) : e.driverId;
         const current = await drivers.canonicalById(driverId);
-        if (current) entries.push({ slug: current.slug, setId: e.setId });
+        if (current && (await drivers.hasApprovedSet(current.id))) entries.push({ slug: current.slug, setId: e.setId });
       }
       return { code: row.code, title: row.title, note: row.note, entries, options: overlayOptionsSchema.parse(row.options), createdAt: row.createdAt };
     },
