@@ -1,6 +1,7 @@
 import { Router } from 'express';
 import type { Knex } from 'knex';
 import { z } from 'zod';
+import { bandOfQuery } from '../../shared/schemas/band';
 import { driverDetailQuerySchema, driverListQuerySchema, driverSlugSchema } from '../../shared/schemas/drivers';
 import { parseOr400 } from '../http/api-error';
 import { currentUser } from '../http/require-role';
@@ -18,8 +19,7 @@ export function createDriversRouter(db: Knex, options: DriversServiceOptions = {
   router.get('/:slug', async (req, res) => {
     const { slug } = parseOr400(slugParams, req.params, 'params');
     const q = parseOr400(driverDetailQuerySchema, req.query, 'query');
-    const band = q.bandLo !== undefined && q.bandHi !== undefined && q.bandHi > q.bandLo ? { lo: q.bandLo, hi: q.bandHi } : undefined;
-    res.json(await service.get(slug, band, viewerOf(currentUser(req))));
+    res.json(await service.get(slug, bandOfQuery(q) ?? undefined, viewerOf(currentUser(req))));
   });
   return router;
 }

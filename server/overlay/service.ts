@@ -4,7 +4,8 @@ import { errorCodes } from '../../shared/api/errors';
 import { computeDerivedFigures } from '../../shared/catalogue/derived-figures';
 import type { Curve } from '../../shared/schemas/drivers';
 import { referenceBandFor } from '../../shared/schemas/drivers';
-import type { OverlayDriver, OverlayQuery, OverlayResponse, SavedOverlay } from '../../shared/schemas/overlay';
+import { bandOfQuery } from '../../shared/schemas/band';
+import type { OverlayDriver, OverlayOptions, OverlayQuery, OverlayResponse, SavedOverlay } from '../../shared/schemas/overlay';
 import { overlayOptionsSchema, type saveOverlaySchema } from '../../shared/schemas/overlay';
 import type { z } from 'zod';
 import type { DriversRepository } from '../drivers/repository';
@@ -28,6 +29,14 @@ function onGrid(c: Curve, values: readonly number[] = c.y, digits: number | 'sig
     if (v === null) return null;
     return digits === 'sig3' ? Number(v.toPrecision(3)) : Math.round(v * scale) / scale;
   });
+}
+
+/** Options saved before today's rules (a band upside down, say) lose the part that no longer passes rather than failing the link. */
+function storedOptions(raw: unknown): OverlayOptions {
+  const parsed = overlayOptionsSchema.safeParse(raw);
+  if (parsed.success) return parsed.data;
+  const { bandLo: _lo, bandHi: _hi, ...rest } = (raw ?? {}) as Record<string, unknown>;
+  return overlayOptionsSchema.safeParse(rest).data ?? overlayOptionsSchema.parse({});
 }
 
 export interface CachedBody {
@@ -115,7 +124,7 @@ export function createOverlayService(drivers: DriversRepository, repo: OverlayRe
     },
 
     async overlay(q: OverlayQuery): Promise<OverlayResponse> {
-      const band = q.bandLo !== undefined && q.bandHi !== undefined && q.bandHi > q.bandLo ? { lo: q.bandLo, hi: q.bandHi } : null;
+      const band = bandOfQuery(q);
       const list = await Promise.all(q.drivers.map((slug, i) => one(slug, q.sets[i] ?? null, band, i)));
       return { grid: OVERLAY_GRID, band, drivers: list };
     },
@@ -158,7 +167,7 @@ export function createOverlayService(drivers: DriversRepository, repo: OverlayRe
         const current = await drivers.canonicalById(driverId);
         if (current && (await drivers.hasApprovedSet(current.id))) entries.push({ slug: current.slug, setId: e.setId });
       }
-      return { code: row.code, title: row.title, note: row.note, entries, options: overlayOptionsSchema.parse(row.options), createdAt: row.createdAt };
+      return { code: row.code, title: row.title, note: row.note, entries, options: storedOptions(row.options), createdAt: row.createdAt };
     },
   };
 }

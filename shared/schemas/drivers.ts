@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { bandFields, refineBand } from './band';
 import { columnLimits } from './column-limits';
 
 export const driverTypes = ['woofer', 'mid-woofer', 'mid-range', 'tweeter', 'full-range', 'subwoofer'] as const;
@@ -100,8 +101,7 @@ export const driverListQuerySchema = z
     priceMin: num().optional(),
     priceMax: num().optional(),
     /** Intended band for a role, Hz. Both ends are needed for role ranking. */
-    bandLo: z.coerce.number().finite().min(10).max(40000).optional(),
-    bandHi: z.coerce.number().finite().min(10).max(40000).optional(),
+    ...bandFields(true),
     /** Intended listening level, dB SPL at 1 m. */
     level: z.coerce.number().finite().min(60).max(130).optional(),
     sort: z.enum(sortKeys).optional(),
@@ -111,12 +111,7 @@ export const driverListQuerySchema = z
   })
   .strict()
   .superRefine((v, ctx) => {
-    if ((v.bandLo === undefined) !== (v.bandHi === undefined)) {
-      ctx.addIssue({ code: 'custom', path: [v.bandLo === undefined ? 'bandLo' : 'bandHi'], message: 'a role band needs both bandLo and bandHi' });
-    }
-    if (v.bandLo !== undefined && v.bandHi !== undefined && v.bandHi <= v.bandLo * 1.05) {
-      ctx.addIssue({ code: 'custom', path: ['bandHi'], message: 'bandHi must be above bandLo' });
-    }
+    refineBand(v, ctx);
     const pairs: [string, string][] = [['sizeMin', 'sizeMax'], ['fsMin', 'fsMax'], ['qtsMin', 'qtsMax'], ['vasMinL', 'vasMaxL'], ['sensMin', 'sensMax'], ['xmaxMinMm', 'xmaxMaxMm'], ['priceMin', 'priceMax']];
     const rec = v as Record<string, unknown>;
     for (const [lo, hi] of pairs) {
@@ -258,12 +253,7 @@ export const driverIdentitySchema = driverDetailSchema.pick({
 });
 export type DriverIdentity = z.infer<typeof driverIdentitySchema>;
 
-export const driverDetailQuerySchema = z
-  .object({
-    bandLo: z.coerce.number().finite().min(10).max(40000).optional(),
-    bandHi: z.coerce.number().finite().min(10).max(40000).optional(),
-  })
-  .strict();
+export const driverDetailQuerySchema = z.object(bandFields(true)).strict().superRefine(refineBand);
 
 export const healthSchema = z.object({ ok: z.literal(true), db: z.literal('up') });
 export type Health = z.infer<typeof healthSchema>;

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { bandFields, refineBand } from './band';
 import { columnLimits, columnText } from './column-limits';
 import { derivedFiguresSchema, driverIdentitySchema, driverSlugSchema, measurementSetSchema, parameterSchema } from './drivers';
 
@@ -28,10 +29,10 @@ export const overlayQuerySchema = z
           return n;
         });
       }),
-    bandLo: z.coerce.number().finite().min(10).max(40000).optional(),
-    bandHi: z.coerce.number().finite().min(10).max(40000).optional(),
+    ...bandFields(true),
   })
-  .strict();
+  .strict()
+  .superRefine(refineBand);
 export type OverlayQuery = z.infer<typeof overlayQuerySchema>;
 
 export const overlaySetRefSchema = measurementSetSchema.pick({ id: true, label: true, reviewer: true, sampleId: true, burnIn: true });
@@ -62,15 +63,15 @@ export const overlayOptionsSchema = z
     level: z.enum(['raw', 'frequency', 'band']).default('raw'),
     alignHz: z.number().min(10).max(40000).optional(),
     smoothing: z.enum(['none', '1/12', '1/6', '1/3']).default('none'),
-    bandLo: z.number().min(10).max(40000).optional(),
-    bandHi: z.number().min(10).max(40000).optional(),
+    ...bandFields(false),
     highlight: z.boolean().default(false),
     offAxis: z.boolean().default(false),
     thdLevelV: z.number().positive().optional(),
     thdUnit: z.enum(['percent', 'db']).default('percent'),
     harmonics: z.boolean().default(false),
   })
-  .strict();
+  .strict()
+  .superRefine(refineBand);
 export type OverlayOptions = z.infer<typeof overlayOptionsSchema>;
 
 export const saveOverlaySchema = z

@@ -1,3 +1,4 @@
+import { bandSearch } from '../logic/driver-notes';
 import { listApiPath, PAGE_SIZE, type ListParams } from '../logic/list-query';
 
 export function driversListPath(params: ListParams = {}, limit = PAGE_SIZE): string {
@@ -6,11 +7,6 @@ export function driversListPath(params: ListParams = {}, limit = PAGE_SIZE): str
 
 /** The detail path; a complete band makes the server derive the figures over it. */
 export function driverPath(slug: string, band?: { bandLo?: string; bandHi?: string }): string {
-  const qs = new URLSearchParams();
-  if (band?.bandLo && band?.bandHi) {
-    qs.set('bandLo', band.bandLo);
-    qs.set('bandHi', band.bandHi);
-  }
-  const s = qs.toString();
+  const s = bandSearch(band).toString();
   return `/api/drivers/${encodeURIComponent(slug)}${s ? `?${s}` : ''}`;
 }

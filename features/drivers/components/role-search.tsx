@@ -1,6 +1,6 @@
 import { StyleSheet, Text, View } from 'react-native';
 import { ActionButton, Card, colors, DebouncedTextInput, fonts, space, ToggleChip } from '../../ui';
-import { applyPreset, clearRole, hasRole, rolePresets, withParams, type ListParams, type RolePreset } from '../logic/list-query';
+import { applyPreset, clearRole, hasRole, roleBandProblem, rolePresets, withParams, type ListParams, type RolePreset } from '../logic/list-query';
 
 const numeric = (s: string) => s.replace(/,/g, '.').replace(/[^0-9.]/g, '');
 
@@ -24,6 +24,7 @@ export function RoleSearch({ params, onChange }: { params: ListParams; onChange:
       />
     </View>
   );
+  const problem = roleBandProblem(params);
   return (
     <Card testID="role-search">
       <View style={styles.head}>
@@ -41,6 +42,11 @@ export function RoleSearch({ params, onChange }: { params: ListParams; onChange:
         {field('bandHi', 'Band high (Hz)', '3000')}
         {field('level', 'Level (dB SPL at 1 m)', '90')}
       </View>
+      {problem ? (
+        <Text style={styles.problem} testID="role-band-problem" accessibilityRole="alert">
+          {problem}; the list is not ranked until the band is fixed.
+        </Text>
+      ) : null}
     </Card>
   );
 }
@@ -54,4 +60,5 @@ const styles = StyleSheet.create({
   field: { gap: 2, flexGrow: 1, flexBasis: 100 },
   label: { fontFamily: fonts.semibold, fontSize: 12, color: colors.inkSoft },
   input: { width: '100%' },
+  problem: { fontFamily: fonts.semibold, fontSize: 13, color: colors.warn },
 });

@@ -15,6 +15,8 @@ describe('alias redirect', () => {
   it('carries a complete role band to the detail page', () => {
     expect(driverHref('a-b', { bandLo: '300', bandHi: '3000' })).toBe('/drivers/a-b?bandLo=300&bandHi=3000');
     expect(driverHref('a-b', { bandLo: '300' })).toBe('/drivers/a-b');
+    expect(driverHref('a-b', { bandLo: '3000', bandHi: '300' })).toBe('/drivers/a-b');
+    expect(driverHref('a-b', { bandLo: '1000', bandHi: '1040' })).toBe('/drivers/a-b');
   });
 });
 

@@ -1,5 +1,6 @@
 // Small pieces of driver-page logic kept apart from React: the alias redirect, the safety notes
 // that apply to a driver, and the text of a role ranking.
+import { isValidBand } from '../../../shared/schemas/band';
 import type { DriverDetail, DriverSummary, DriverType, RoleFit } from '../../../shared/schemas/drivers';
 
 /** Where to send the browser when the page was opened under an old slug, or null. */
@@ -8,14 +9,19 @@ export function aliasRedirect(detail: Pick<DriverDetail, 'slug' | 'requestedSlug
   return { from: detail.requestedSlug, to: detail.slug };
 }
 
-/** The detail path, carrying a role band so the server derives figures over it. */
-export function driverHref(slug: string, band?: { bandLo?: string; bandHi?: string }): string {
+/** bandLo and bandHi for a link or a request, only when they make a band the server accepts. */
+export function bandSearch(band?: { bandLo?: string; bandHi?: string }): URLSearchParams {
   const qs = new URLSearchParams();
-  if (band?.bandLo && band?.bandHi) {
+  if (band?.bandLo && band?.bandHi && isValidBand(Number(band.bandLo), Number(band.bandHi))) {
     qs.set('bandLo', band.bandLo);
     qs.set('bandHi', band.bandHi);
   }
-  const s = qs.toString();
+  return qs;
+}
+
+/** The detail path, carrying a role band so the server derives figures over it. */
+export function driverHref(slug: string, band?: { bandLo?: string; bandHi?: string }): string {
+  const s = bandSearch(band).toString();
   return `/drivers/${encodeURIComponent(slug)}${s ? `?${s}` : ''}`;
 }
 

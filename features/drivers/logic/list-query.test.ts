@@ -1,5 +1,5 @@
 import {
-  activeFilterCount, applyPreset, clearFilters, clearRole, listApiPath, pageOf, paramsFromSearch, rolePresets, routerParams, sortChoices, toggleType, withParams,
+  activeFilterCount, applyPreset, clearFilters, clearRole, listApiPath, pageOf, paramsFromSearch, roleBandProblem, rolePresets, routerParams, sortChoices, toggleType, withParams,
 } from './list-query';
 
 describe('URL params to search state', () => {
@@ -14,6 +14,16 @@ describe('URL params to search state', () => {
   it('ranks by role when a band is set and no other order was picked', () => {
     expect(listApiPath({ bandLo: '300', bandHi: '3000', level: '90' })).toBe('/api/drivers?bandLo=300&bandHi=3000&level=90&sort=role&limit=24');
     expect(listApiPath({ bandLo: '300', bandHi: '3000', sort: 'price' })).toContain('sort=price');
+  });
+
+  it('leaves out a band the server would refuse and says in the form what is wrong with it', () => {
+    const upsideDown = { bandLo: '3000', bandHi: '300', level: '90', q: 'mid' };
+    expect(listApiPath(upsideDown)).toBe('/api/drivers?q=mid&level=90&limit=24');
+    expect(roleBandProblem(upsideDown)).toBe('Band high must be above Band low (by at least 5 %)');
+    expect(roleBandProblem({ bandLo: '5', bandHi: '300' })).toBe('Band low must be between 10 and 40000 Hz');
+    expect(roleBandProblem({ bandLo: '300', bandHi: '3000' })).toBeNull();
+    // Half a band is still being typed: nothing to complain about yet.
+    expect(roleBandProblem({ bandLo: '300' })).toBeNull();
   });
 
   it('gives the router every name, undefined when unset, so stale values are removed', () => {

@@ -1,6 +1,7 @@
 // The search screen's whole state lives in the URL, with the same names the API takes, so a link
 // reproduces a search and the URL can be passed to the API almost unchanged. Values stay strings
 // here: the server parses and validates them and answers a 400 the screen shows.
+import { bandProblem } from '../../../shared/schemas/band';
 import { driverTypes, sortKeys, type DriverType, type SortKey } from '../../../shared/schemas/drivers';
 
 export const rangeFilters = [
@@ -48,15 +49,25 @@ export function hasRole(params: ListParams): boolean {
   return Boolean(params.bandLo && params.bandHi);
 }
 
-/** The API query string for a search, in a fixed order so equal searches share a cache entry. */
+/** What is wrong with the role band as typed, in the form's words; null when it is usable or not complete. */
+export function roleBandProblem(params: ListParams): string | null {
+  if (!hasRole(params)) return null;
+  return bandProblem(Number(params.bandLo), Number(params.bandHi), { lo: 'Band low', hi: 'Band high' });
+}
+
+/**
+ * The API query string for a search, in a fixed order so equal searches share a cache entry. A band
+ * the server would refuse stays out: the role form says what is wrong while the list stays usable.
+ */
 export function listApiPath(params: ListParams, limit = PAGE_SIZE): string {
   const qs = new URLSearchParams();
+  const badBand = roleBandProblem(params) !== null;
   for (const name of listParamNames) {
     const v = params[name];
-    if (v) qs.set(name, v);
+    if (v && !(badBand && (name === 'bandLo' || name === 'bandHi'))) qs.set(name, v);
   }
   // A role band ranks by fit unless the user picked another order.
-  if (hasRole(params) && !params.sort) qs.set('sort', 'role');
+  if (hasRole(params) && !badBand && !params.sort) qs.set('sort', 'role');
   qs.set('limit', String(limit));
   return `/api/drivers?${qs.toString()}`;
 }

@@ -20,6 +20,8 @@ describe('stack URL state', () => {
 
   it('ignores values out of range', () => {
     expect(parseOptions({ level: 'loud', smoothing: '1/5', bandLo: '3000', bandHi: '300', alignHz: '-1' })).toEqual(DEFAULT_OPTIONS);
+    // Narrower than the server accepts: dropped here so the comparison request never carries it.
+    expect(parseOptions({ bandLo: '1000', bandHi: '1040' })).toEqual(DEFAULT_OPTIONS);
   });
 
   it('names the normalisation in words', () => {

@@ -1,5 +1,6 @@
 // The stack's state as URL parameters: every display choice lives in the URL so a copied address
 // reproduces the view. Only non-default values are written, which keeps shared links short.
+import { BAND_MAX_HZ, BAND_MIN_HZ, isValidBand } from '../../../shared/schemas/band';
 import { MAX_STACK, type OverlayOptions } from '../../../shared/schemas/overlay';
 
 export type LevelMode = OverlayOptions['level'];
@@ -50,9 +51,9 @@ export function parseOptions(p: StackParams): OverlayOptions {
   if (p.smoothing && (smoothings as readonly string[]).includes(p.smoothing)) o.smoothing = p.smoothing as Smoothing;
   const alignHz = num(p.alignHz, 10, 40000);
   if (alignHz != null) o.alignHz = alignHz;
-  const lo = num(p.bandLo, 10, 40000);
-  const hi = num(p.bandHi, 10, 40000);
-  if (lo != null && hi != null && hi > lo) {
+  const lo = num(p.bandLo, BAND_MIN_HZ, BAND_MAX_HZ);
+  const hi = num(p.bandHi, BAND_MIN_HZ, BAND_MAX_HZ);
+  if (lo != null && hi != null && isValidBand(lo, hi)) {
     o.bandLo = lo;
     o.bandHi = hi;
   }
