@@ -8,9 +8,10 @@ import { slugOf } from '../../shared/catalogue/slug';
 import { charCount, columnLimits } from '../../shared/schemas/column-limits';
 import type { NearDuplicateQuery, NearDuplicatesResponse, UploadMeta } from '../../shared/schemas/submissions';
 import type { submissionSchema } from '../../shared/schemas/submissions';
-import { roleAtLeast, type User } from '../../shared/schemas/users';
+import type { User } from '../../shared/schemas/users';
 import { ACOUSTIC_KINDS, parseMeasurementFile, type CurveKind, type ParseResult } from '../../shared/uploads';
 import type { z } from 'zod';
+import { viewerOf } from '../drivers/service';
 import { ApiError, notFound } from '../http/api-error';
 import type { SubmissionsRepository } from './repository';
 
@@ -138,7 +139,7 @@ export function createSubmissionsService(repo: SubmissionsRepository) {
           const { driveVoltageV, distanceM } = input.method;
           const plan = normalisationPlan(driveVoltageV, distanceM);
           const anglesDeg = [...new Set(staged.filter((u) => u.kind === 'spl').map((u) => u.angleDeg ?? 0))];
-          const created = await repo.createPendingSet(trx, { driver, userId: user.id, seesPending: roleAtLeast(user.role, 'moderator'), method: { ...input.method, reviewer: user.displayName }, anglesDeg, normalisation: plan.record });
+          const created = await repo.createPendingSet(trx, { driver, userId: user.id, seesPending: viewerOf(user).seesPending, method: { ...input.method, reviewer: user.displayName }, anglesDeg, normalisation: plan.record });
           // Each original is read again from its stored bytes, so what lands is exactly what can be re-run.
           for (const u of staged) {
             const curve = normaliseUpload(u, plan.splShift);
@@ -185,7 +186,7 @@ export function createSubmissionsService(repo: SubmissionsRepository) {
 
     /** Entries that may already be the driver a reviewer is about to create, strongest first. */
     async nearDuplicates(user: User, input: NearDuplicateQuery): Promise<NearDuplicatesResponse> {
-      const seesPending = roleAtLeast(user.role, 'moderator');
+      const { seesPending } = viewerOf(user);
       // Pending entries are private to their submitters and the moderators until approved.
       const visible = (await repo.nearDuplicateCandidates(user.id))
         .filter((c) => c.status === 'listed' || seesPending || c.submittedByUser)
