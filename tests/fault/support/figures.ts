@@ -11,9 +11,11 @@ export interface Figure {
   value: string;
 }
 
+/** Starts a run: no figures yet, and an empty server log (artifacts/fault-server.log). */
 export function resetFigures(): void {
   mkdirSync(join(root, 'artifacts'), { recursive: true });
   writeFileSync(file, '[]');
+  writeFileSync(join(root, 'artifacts', 'fault-server.log'), '');
 }
 
 export function readFigures(): Figure[] {
