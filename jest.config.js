@@ -1,5 +1,5 @@
-// Four suites: pure units, the API against the real MariaDB, client hooks/components with msw,
-// and browser flows. `npm test` runs them in that order; `npx jest --selectProjects unit` runs one.
+// Five suites: pure units, the API against the real MariaDB, faults (its own MariaDB and server,
+// stopped and killed on purpose), client hooks/components with msw, and browser flows. `npm test` runs them in that order; `npx jest --selectProjects unit` runs one.
 const esmPackages = [
   'd3-[a-z-]+', 'internmap', 'ml-[a-z-]+', 'is-any-array', 'msw', '@mswjs', '@bundled-es-modules', 'rettime', 'until-async', '@open-draft',
   'headers-polyfill', 'outvariant', 'strict-event-emitter', 'is-node-process', 'fast-check', 'pure-rand',
@@ -33,6 +33,14 @@ module.exports = {
       displayName: 'api',
       testMatch: ['<rootDir>/tests/api/**/*.test.ts'],
       globalSetup: '<rootDir>/tests/support/global-setup.ts',
+      maxWorkers: 1,
+    },
+    {
+      ...node,
+      displayName: 'fault',
+      testMatch: ['<rootDir>/tests/fault/**/*.test.ts'],
+      globalSetup: '<rootDir>/tests/fault/support/global-setup.ts',
+      globalTeardown: '<rootDir>/tests/fault/support/global-teardown.ts',
       maxWorkers: 1,
     },
     {

@@ -1,5 +1,5 @@
 // `npm test`: sets up what the suites need (dependencies, a private test MariaDB, Chromium, the
-// web export), runs typecheck, lint, the jest suites and the browser flows, and ends with one
+// web export), runs typecheck, lint, the jest suites (the fault suite after the main ones) and the browser flows, and ends with one
 // "N passed, N failed" line. Exits non-zero on any failure.
 import { existsSync, mkdirSync, readFileSync, rmSync } from 'node:fs';
 import { join } from 'node:path';
@@ -52,6 +52,8 @@ try {
   check('lint', runSync('npx', ['eslint', '.', '--max-warnings=0']));
   log('unit, API and client suites');
   await jest('main', ['--selectProjects', 'unit', 'api', 'client', '--maxWorkers=2']);
+  log('fault suite (its own MariaDB and server; about two minutes)');
+  await jest('fault', ['--selectProjects', 'fault', '--runInBand']);
   let built = true;
   try {
     ensureWebBuild();

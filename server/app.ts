@@ -46,16 +46,17 @@ export function createApp(options: AppOptions): Express {
     adminLogins: options.auth?.adminLogins,
     signInPerMinute: options.auth?.signInPerMinute,
   });
+  // Health and the calculators need no user, so they never wait on the session store.
+  app.use('/api/health', createHealthRouter(options.db));
   app.use(['/api', '/auth'], sameOriginOnly([publicUrl], SESSION_COOKIE));
-  app.use(['/api', '/auth'], ...auth.middleware);
   const writes = limiter(options.writesPerMinute ?? 120, 'changes');
   app.use('/api', (req, res, next) => (req.method === 'GET' || req.method === 'HEAD' ? next() : writes(req, res, next)));
+  app.use('/api/calc', createCalcRouter());
+  app.use(['/api', '/auth'], ...auth.middleware);
   app.use(auth.authRouter);
   app.use('/api', auth.apiRouter);
 
-  app.use('/api/health', createHealthRouter(options.db));
   app.use('/api/drivers', createDriversRouter(options.db, { staleAfterMs: options.searchStaleAfterMs }));
-  app.use('/api/calc', createCalcRouter());
   app.use('/api', createOverlayRouter(options.db, { allowAnonymousSave: options.allowAnonymousSave ?? false, staleAfterMs: options.searchStaleAfterMs }));
   app.use('/api', createSubmissionsRouter(options.db));
   app.use('/api', apiNotFound);

@@ -1,10 +1,11 @@
 import { join } from 'node:path';
-import { createDb } from '../db/connection';
+import { createDb, dbSettingsFromEnv } from '../db/connection';
+import { dbTimeoutsFromEnv } from '../db/outage-guard';
 import { createApp } from './app';
 
 const port = Number(process.env.PORT ?? 8080);
 const host = process.env.HOST ?? '127.0.0.1';
-const db = createDb();
+const db = createDb(dbSettingsFromEnv(), { timeouts: dbTimeoutsFromEnv() });
 const env = process.env;
 // A real provider is configured by OAUTH_CLIENT_ID and OAUTH_CLIENT_SECRET; without them the local
 // fake provider signs people in, which is only for development and tests.
@@ -33,6 +34,7 @@ const app = createApp({
     adminLogins: (env.CONESTACK_ADMINS ?? (provider ? '' : 'test-admin')).split(',').map((s: string) => s.trim()).filter(Boolean),
   },
   allowAnonymousSave: env.ALLOW_ANONYMOUS_SAVE === '1',
+  ...(Number(env.WRITES_PER_MINUTE) > 0 ? { writesPerMinute: Number(env.WRITES_PER_MINUTE) } : {}),
 });
 
 const server = app.listen(port, host, () => {

@@ -1,6 +1,12 @@
 import type { Knex } from 'knex';
 import type { AuditEntry, Role, User } from '../../shared/schemas/users';
 
+export type RoleChangeOutcome =
+  | { outcome: 'changed'; oldRole: Role }
+  | { outcome: 'not-found' }
+  | { outcome: 'last-admin' }
+  | { outcome: 'actor-not-admin' };
+
 const columns = ['id', 'login', 'display_name as displayName', 'email', 'role'];
 
 export function createUsersRepository(db: Knex) {
@@ -30,14 +36,27 @@ export function createUsersRepository(db: Knex) {
       return db('users').where({ login }).first(columns);
     },
 
-    /** Changes a role and writes the audit entry in one transaction: both land or neither. */
-    async changeRole(targetId: number, newRole: Role, actorId: number | null, reason: string | null): Promise<{ oldRole: Role } | undefined> {
+    /**
+     * Changes a role and writes the audit entry in one transaction: both land or neither. Every
+     * admin row (and the target's) is locked first, always in id order, so two admins demoting
+     * each other queue up instead of deadlocking, and the second sees what the first did.
+     */
+    async changeRole(targetId: number, newRole: Role, actorId: number | null, reason: string | null): Promise<RoleChangeOutcome> {
       return db.transaction(async (trx) => {
-        const target = await trx('users').where({ id: targetId }).forUpdate().first('role');
-        if (!target) return undefined;
+        const rows: { id: number; role: Role }[] = await trx('users')
+          .where({ role: 'admin' })
+          .orWhere({ id: targetId })
+          .orderBy('id')
+          .forUpdate()
+          .select('id', 'role');
+        const target = rows.find((r) => r.id === targetId);
+        if (!target) return { outcome: 'not-found' as const };
+        const admins = rows.filter((r) => r.role === 'admin');
+        if (target.role === 'admin' && newRole !== 'admin' && admins.length === 1) return { outcome: 'last-admin' as const };
+        if (actorId !== null && !admins.some((r) => r.id === actorId)) return { outcome: 'actor-not-admin' as const };
         await trx('users').where({ id: targetId }).update({ role: newRole });
         await trx('role_audit').insert({ actor_id: actorId, target_id: targetId, old_role: target.role, new_role: newRole, reason });
-        return { oldRole: target.role as Role };
+        return { outcome: 'changed' as const, oldRole: target.role };
       });
     },
 

@@ -5,10 +5,11 @@ import type { Knex } from 'knex';
 import passport from 'passport';
 import { Strategy as GitHubStrategy, type Profile, type StrategyOptions } from 'passport-github2';
 import { z } from 'zod';
+import { isDbUnavailable } from '../../db/db-errors';
 import { errorCodes } from '../../shared/api/errors';
 import { roleChangeSchema, type User } from '../../shared/schemas/users';
 import { ApiError, parseOr400 } from '../http/api-error';
-import { currentUser, requireRole } from '../http/require-role';
+import { currentUser, markSessionUnreadable, requireRole, sessionUnreadable } from '../http/require-role';
 import { limiter } from '../http/security';
 import { createFakeProvider } from './fake-provider';
 import { createUsersRepository } from './repository';
@@ -45,6 +46,10 @@ export function createAuth(db: Knex, options: AuthOptions) {
   // The store wants a mysql-style query(sql, params) that returns a Promise of [rows, fields].
   const connection = { query: (sql: string, params: unknown[]) => db.raw(sql, params as never).then((r: unknown) => r) };
   const store = new MySQLStore({ createDatabaseTable: false, clearExpired: false, endConnectionOnClose: false, expiration: SESSION_MS }, connection as never);
+  // A touch only pushes the expiry back; failing one must not fail a response already on its way.
+  const touch = store.touch.bind(store);
+  store.touch = ((sid: string, sess: unknown, cb?: (err: unknown) => void) =>
+    touch(sid, sess, (err: unknown) => cb?.(err && isDbUnavailable(err) ? null : err))) as typeof store.touch;
   const secure = options.publicUrl.startsWith('https://');
   const sessions = session({
     name: SESSION_COOKIE,
@@ -106,8 +111,22 @@ export function createAuth(db: Knex, options: AuthOptions) {
     users.findById(id).then((u) => done(null, u ?? false), done);
   });
 
-  /** Session, then the user (fresh from the database each request, so role changes apply at once). */
-  const middleware: RequestHandler[] = [sessions, pp.initialize(), pp.session()];
+  const readUser = pp.session();
+  /**
+   * Session, then the user (fresh from the database each request, so role changes apply at once).
+   * When the database cannot say who is asking, a read goes on as a visitor's (the catalogue stays
+   * up in an outage; routes that need the user answer 503), while a change or sign-in fails with 503.
+   */
+  const withSession: RequestHandler = (req, res, next) => {
+    const failed = (err: unknown) => {
+      const read = req.method === 'GET' || req.method === 'HEAD';
+      if (!read || !isDbUnavailable(err) || req.originalUrl.startsWith('/auth/')) return next(err);
+      markSessionUnreadable(req, err);
+      next();
+    };
+    sessions(req, res, (err?: unknown) => (err ? failed(err) : readUser(req, res, (userErr?: unknown) => (userErr ? failed(userErr) : next()))));
+  };
+  const middleware: RequestHandler[] = [pp.initialize(), withSession];
 
   const auth = Router();
   if (fake) auth.use('/fake-provider', createFakeProvider());
@@ -148,7 +167,7 @@ export function createAuth(db: Knex, options: AuthOptions) {
   const api = Router();
   api.get('/me', (req, res, next) => {
     const user = currentUser(req);
-    if (!user) return next(new ApiError(401, errorCodes.unauthenticated, 'Not signed in'));
+    if (!user) return next(sessionUnreadable(req) ?? new ApiError(401, errorCodes.unauthenticated, 'Not signed in'));
     res.set('Cache-Control', 'no-store').json(user);
   });
   api.get('/admin/users', requireRole('admin'), async (_req, res) => {

@@ -1,8 +1,27 @@
+import { setTimeout as sleep } from 'node:timers/promises';
+import { isLockConflict } from '../../db/db-errors';
 import { errorCodes } from '../../shared/api/errors';
 import { charCount, columnLimits, truncateChars } from '../../shared/schemas/column-limits';
 import type { Role, User } from '../../shared/schemas/users';
 import { ApiError, notFound } from '../http/api-error';
-import type { UsersRepository } from './repository';
+import type { RoleChangeOutcome, UsersRepository } from './repository';
+
+/** Attempts of a role change that lost a lock race before the caller is told to try again. */
+export const ROLE_CHANGE_ATTEMPTS = 4;
+
+/** Runs a role change again when the database rolled it back for a deadlock or a lock wait. */
+async function withLockRetry(run: () => Promise<RoleChangeOutcome>): Promise<RoleChangeOutcome> {
+  for (let attempt = 1; ; attempt++) {
+    try {
+      return await run();
+    } catch (err) {
+      if (!isLockConflict(err)) throw err;
+      if (attempt >= ROLE_CHANGE_ATTEMPTS) throw new ApiError(409, errorCodes.conflict, 'Another role change held the same accounts; try again');
+      // Jitter, so two retrying requests do not meet again in step.
+      await sleep(10 + Math.random() * 40 * attempt);
+    }
+  }
+}
 
 export interface ProviderProfile {
   provider: string;
@@ -40,7 +59,7 @@ export function createUsersService(repo: UsersRepository, options: { adminLogins
       const existing = await repo.findByProvider(p.provider, p.id);
       if (existing) {
         await repo.updateProfile(existing.id, p);
-        if (admins.has(p.login.toLowerCase()) && existing.role !== 'admin') await repo.changeRole(existing.id, 'admin', null, 'configured admin');
+        if (admins.has(p.login.toLowerCase()) && existing.role !== 'admin') await withLockRetry(() => repo.changeRole(existing.id, 'admin', null, 'configured admin'));
         return (await repo.findById(existing.id)) as User;
       }
       const role: Role = admins.has(p.login.toLowerCase()) ? 'admin' : 'member';
@@ -57,8 +76,10 @@ export function createUsersService(repo: UsersRepository, options: { adminLogins
         // An admin demoting themselves could leave nobody able to hand out roles.
         throw new ApiError(409, errorCodes.conflict, 'Admins cannot change their own role');
       }
-      const changed = await repo.changeRole(targetId, role, actor.id, reason ?? null);
-      if (!changed) throw notFound(`User ${targetId}`);
+      const result = await withLockRetry(() => repo.changeRole(targetId, role, actor.id, reason ?? null));
+      if (result.outcome === 'not-found') throw notFound(`User ${targetId}`);
+      if (result.outcome === 'last-admin') throw new ApiError(409, errorCodes.conflict, 'This is the last admin; make someone else admin first');
+      if (result.outcome === 'actor-not-admin') throw new ApiError(403, errorCodes.forbidden, 'You are no longer an admin');
       return (await repo.findById(targetId)) as User;
     },
 
@@ -66,7 +87,7 @@ export function createUsersService(repo: UsersRepository, options: { adminLogins
     async promote(login: string): Promise<User> {
       const user = await repo.findByLogin(login);
       if (!user) throw notFound(`User "${login}"`);
-      await repo.changeRole(user.id, 'admin', null, 'seed command');
+      await withLockRetry(() => repo.changeRole(user.id, 'admin', null, 'seed command'));
       return (await repo.findById(user.id)) as User;
     },
   };

@@ -1,3 +1,4 @@
+import { isDbUnavailable } from '../../db/db-errors';
 import { computeDerivedFigures } from '../../shared/catalogue/derived-figures';
 import type { DriverDetail, DriverIdentity, DriverListQuery, DriverListResponse } from '../../shared/schemas/drivers';
 import { availabilitySchema, referenceBandFor } from '../../shared/schemas/drivers';
@@ -54,7 +55,14 @@ export function createDriversService(repo: DriversRepository, options: DriversSe
   async function currentIndex(): Promise<SearchIndex> {
     const now = Date.now();
     if (index && now - checkedAt < staleAfterMs) return index;
-    const v = await repo.catalogueVersion();
+    let v: string;
+    try {
+      v = await repo.catalogueVersion();
+    } catch (err) {
+      // While the database is away, the last index built is a far better answer than none.
+      if (index && isDbUnavailable(err)) return index;
+      throw err;
+    }
     checkedAt = Date.now();
     if (index && v === version) return index;
     if (!building) {

@@ -1,4 +1,5 @@
 import { createHash, randomBytes } from 'node:crypto';
+import { isDbUnavailable } from '../../db/db-errors';
 import { interpolateLog, logFrequencyGrid } from '../../shared/acoustics/curves';
 import { errorCodes } from '../../shared/api/errors';
 import { computeDerivedFigures } from '../../shared/catalogue/derived-figures';
@@ -107,8 +108,15 @@ export function createOverlayService(drivers: DriversRepository, repo: OverlayRe
   return {
     /** The comparison as JSON bytes with its ETag, from the cache when the catalogue has not changed. */
     async overlayJson(q: OverlayQuery): Promise<CachedBody> {
-      await freshCache();
       const key = JSON.stringify([q.drivers, q.sets, q.bandLo, q.bandHi]);
+      try {
+        await freshCache();
+      } catch (err) {
+        // While the database is away, a comparison already built is served as it was.
+        const kept = cache.get(key);
+        if (kept && isDbUnavailable(err)) return kept;
+        throw err;
+      }
       const hit = cache.get(key);
       if (hit !== undefined) {
         cache.delete(key);

@@ -21,6 +21,7 @@ describe('GET /api/health', () => {
       const res = await request(createApp({ db: down })).get('/api/health');
       expect(res.status).toBe(503);
       expect(errorEnvelopeSchema.parse(res.body).error.code).toBe('db_unavailable');
+      expect(Number(res.headers['retry-after'])).toBeGreaterThan(0);
     } finally {
       await down.destroy();
     }
