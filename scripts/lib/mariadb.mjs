@@ -56,7 +56,7 @@ function admin(cfg, args) {
   return spawnSync('mariadb-admin', [`--defaults-file=${cfg.cnf}`, '--user=root', ...args], { encoding: 'utf8' });
 }
 
-function ping(cfg) {
+export function ping(cfg) {
   return admin(cfg, ['--connect-timeout=1', 'ping']).status === 0;
 }
 
