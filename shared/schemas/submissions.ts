@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import type { NearDuplicate } from '../catalogue/near-duplicates';
+import { UPLOAD_LIMITS } from '../uploads/preview';
 import { burnInSchema, curveKindSchema, driverTypeSchema } from './drivers';
 
 /** One entry per uploaded file, in the same order as the files, sent as the `meta` form field. */
@@ -51,7 +52,7 @@ export const submissionSchema = z
         .strict(),
     ]),
     method: methodSchema,
-    uploads: z.array(z.string().regex(/^[a-f0-9]{32}$/, 'not an upload token')).min(1, 'upload at least one curve').max(60),
+    uploads: z.array(z.string().regex(/^[a-f0-9]{32}$/, 'not an upload token')).min(1, 'upload at least one curve').max(UPLOAD_LIMITS.curvesPerSubmission),
     parameters: z
       .array(z.object({ name: z.string().regex(/^[a-z0-9_]{1,40}$/), value: z.number().finite(), signal: z.enum(['small', 'large']).default('small') }).strict())
       .max(60)
