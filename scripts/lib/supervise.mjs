@@ -66,21 +66,24 @@ export function createSupervisor({ backoff = defaultBackoff, watchdog = null } =
 
   async function relaunch(entry) {
     if (stopping) return;
+    // stop() waits for a start under way, so a child that comes up during Ctrl-C is stopped too.
+    entry.starting = entry.service.start();
     let child;
     try {
-      child = await entry.service.start();
+      child = await entry.starting;
     } catch (err) {
-      restartLater(entry, 0, `could not start (${err instanceof Error ? err.message.split('\n')[0] : err})`);
+      if (!stopping) restartLater(entry, 0, `could not start (${err instanceof Error ? err.message.split('\n')[0] : err})`);
       return;
+    } finally {
+      entry.starting = null;
     }
-    if (stopping) await entry.service.stop(child);
-    else watch(entry, child);
+    watch(entry, child);
   }
 
   return {
     /** Watches `child` if given (already started), else starts the service; a first start that fails throws. */
     async add(service, child = null) {
-      const entry = { service, child: null, startedAt: 0, delay: null };
+      const entry = { service, child: null, starting: null, startedAt: 0, delay: null };
       services.push(entry);
       watch(entry, child ?? (await service.start()));
     },
@@ -90,7 +93,9 @@ export function createSupervisor({ backoff = defaultBackoff, watchdog = null } =
       for (const t of timers) clearTimeout(t);
       timers.clear();
       for (const entry of [...services].reverse()) {
-        if (entry.child) await entry.service.stop(entry.child);
+        const started = entry.starting ? await entry.starting.catch(() => null) : null;
+        const child = entry.child ?? started;
+        if (child) await entry.service.stop(child);
       }
       watchdog?.release();
     },
