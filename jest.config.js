@@ -31,7 +31,8 @@ module.exports = {
     {
       ...node,
       displayName: 'api',
-      testMatch: ['<rootDir>/tests/api/**/*.test.ts'],
+      // tests/ops drives the start script and the backup scripts against real MariaDB instances.
+      testMatch: ['<rootDir>/tests/api/**/*.test.ts', '<rootDir>/tests/ops/**/*.test.ts'],
       globalSetup: '<rootDir>/tests/support/global-setup.ts',
       maxWorkers: 1,
     },

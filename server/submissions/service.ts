@@ -1,5 +1,4 @@
 import { randomBytes } from 'node:crypto';
-import { interpolateLog, logFrequencyGrid } from '../../shared/acoustics/curves';
 import { normaliseSpl } from '../../shared/acoustics/levels';
 import { parameterUnit } from '../../shared/catalogue/parameter-units';
 import { errorCodes } from '../../shared/api/errors';
@@ -9,13 +8,12 @@ import { charCount, columnLimits } from '../../shared/schemas/column-limits';
 import type { NearDuplicateQuery, NearDuplicatesResponse, UploadMeta } from '../../shared/schemas/submissions';
 import type { submissionSchema } from '../../shared/schemas/submissions';
 import type { User } from '../../shared/schemas/users';
-import { ACOUSTIC_KINDS, parseMeasurementFile, type CurveKind, type ParseResult } from '../../shared/uploads';
+import { ACOUSTIC_KINDS, onCommonGrid, parseMeasurementFile, parseSummary, previewPoints, type CurveKind, type ParseResult } from '../../shared/uploads';
 import type { z } from 'zod';
 import { viewerOf } from '../drivers/service';
 import { ApiError, notFound } from '../http/api-error';
 import type { SubmissionsRepository } from './repository';
 
-const GRID = logFrequencyGrid();
 /** How long a read file waits for its submission before it is dropped. */
 export const STAGED_UPLOAD_HOURS = 24;
 
@@ -43,21 +41,12 @@ type NormalisedCurve = { kind: string; angleDeg: number | null; driveLevelV: num
 
 /** Reads one stored original with its saved settings and puts it on the common grid. */
 export function normaliseUpload(u: StoredUpload, splShift: number): NormalisedCurve | { error: string } {
-  const parsed = parseMeasurementFile({ name: u.fileName, bytes: new Uint8Array(u.bytes), kind: u.kind as CurveKind, options: u.settings.options });
+  const parsed = parseMeasurementFile({ name: u.fileName, bytes: u.bytes, kind: u.kind as CurveKind, options: u.settings.options });
   if (!parsed.ok) return { error: parsed.error.message };
   const p = parsed.points;
   if (!ACOUSTIC_KINDS.includes(u.kind as CurveKind)) return { kind: u.kind, angleDeg: null, driveLevelV: null, x: p.x, y: p.y, phase: p.phase };
-  const x: number[] = [];
-  const y: number[] = [];
-  const ph: number[] = [];
-  for (const f of GRID) {
-    const v = interpolateLog(p.x, p.y, f);
-    if (v === null) continue;
-    x.push(Number(f.toPrecision(6)));
-    y.push(Number((u.kind === 'spl' ? v + splShift : v).toPrecision(6)));
-    if (p.phase) ph.push(Number((interpolateLog(p.x, p.phase, f) as number).toFixed(2)));
-  }
-  return { kind: u.kind, angleDeg: u.kind === 'spl' ? (u.angleDeg ?? 0) : u.angleDeg, driveLevelV: u.driveLevelV, x, y, phase: p.phase ? ph : null };
+  const onGrid = onCommonGrid(p, u.kind === 'spl' ? splShift : 0);
+  return { kind: u.kind, angleDeg: u.kind === 'spl' ? (u.angleDeg ?? 0) : u.angleDeg, driveLevelV: u.driveLevelV, ...onGrid };
 }
 
 // Four characters spare for a numbered variant ("-2" … "-999") when the slug is taken.
@@ -84,27 +73,48 @@ function checkFileNames(files: readonly UploadedFile[]): void {
   );
   if (fields.length) throw new ApiError(400, errorCodes.validation, fields.map((f) => `${f.field}: ${f.message}`).join('; '), { fields });
 }
+/** Lets other requests (health checks, pages) run between two files of a large upload. */
+const yieldToEventLoop = () => new Promise<void>((resolve) => setImmediate(resolve));
 
 export function createSubmissionsService(repo: SubmissionsRepository) {
   return {
-    /** Reads each file, stages the ones that parse (bytes kept) and reports each file on its own. */
+    /**
+     * Reads each file, stages the ones that parse (bytes kept) and reports each file on its own,
+     * with a preview on the common grid rather than every point read. Takes the files over: each
+     * one's bytes are let go once it is staged, so a large request never holds two copies of all.
+     */
     async parse(user: User, files: UploadedFile[], meta: UploadMeta) {
       if (files.length !== meta.length) {
         throw new ApiError(400, errorCodes.validation, `meta describes ${meta.length} files but ${files.length} were sent`, { fields: [{ field: 'meta', message: 'one entry per file' }] });
       }
       checkFileNames(files);
       await repo.dropStaleUploads(user.id, STAGED_UPLOAD_HOURS);
+      const queue = files.splice(0);
       const out = [];
-      for (const [i, f] of files.entries()) {
+      for (let i = 0; queue.length > 0; i++) {
+        if (i > 0) await yieldToEventLoop();
+        const f = queue.shift() as UploadedFile;
         const m = meta[i];
-        const result: ParseResult = parseMeasurementFile({ name: f.originalname, bytes: new Uint8Array(f.buffer), kind: m.kind, options: m.options });
+        const result: ParseResult = parseMeasurementFile({ name: f.originalname, bytes: f.buffer, kind: m.kind, options: m.options });
         if (!result.ok) {
           out.push({ fileName: f.originalname, ok: false as const, error: result.error });
           continue;
         }
         const token = randomBytes(16).toString('hex');
         await repo.stageUpload({ token, userId: user.id, fileName: f.originalname, kind: m.kind, angleDeg: m.angleDeg, driveLevelV: m.driveLevelV, bytes: f.buffer, settings: { options: m.options ?? {}, detected: result.settings } });
-        out.push({ fileName: f.originalname, ok: true as const, token, kind: m.kind, angleDeg: m.angleDeg, driveLevelV: m.driveLevelV, points: result.points, settings: result.settings, warnings: result.warnings });
+        out.push({
+          fileName: f.originalname,
+          ok: true as const,
+          token,
+          kind: m.kind,
+          angleDeg: m.angleDeg,
+          driveLevelV: m.driveLevelV,
+          preview: previewPoints(m.kind, result.points),
+          pointCount: result.points.x.length,
+          summary: parseSummary(result),
+          settings: result.settings,
+          warnings: result.warnings,
+        });
       }
       return { files: out };
     },

@@ -17,6 +17,7 @@ export const errorCodes = {
   unauthenticated: 'unauthenticated',
   forbidden: 'forbidden',
   conflict: 'conflict',
+  tooLarge: 'payload_too_large',
   tooManyRequests: 'too_many_requests',
   dbUnavailable: 'db_unavailable',
   internal: 'internal_error',

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import type { NearDuplicate } from '../catalogue/near-duplicates';
+import { UPLOAD_LIMITS } from '../uploads/preview';
 import { columnLimits, columnText } from './column-limits';
 import { burnInSchema, curveKindSchema, driverSlugSchema, driverTypeSchema } from './drivers';
 
@@ -54,7 +55,7 @@ export const submissionSchema = z
         .strict(),
     ]),
     method: methodSchema,
-    uploads: z.array(z.string().regex(/^[a-f0-9]{32}$/, 'not an upload token')).min(1, 'upload at least one curve').max(60),
+    uploads: z.array(z.string().regex(/^[a-f0-9]{32}$/, 'not an upload token')).min(1, 'upload at least one curve').max(UPLOAD_LIMITS.curvesPerSubmission),
     parameters: z
       .array(z.object({ name: z.string().max(columnLimits.parameters.name).regex(/^[a-z0-9_]+$/), value: z.number().finite(), signal: z.enum(['small', 'large']).default('small') }).strict())
       .max(60)

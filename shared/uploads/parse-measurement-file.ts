@@ -111,8 +111,36 @@ function isDataLine(tokens: string[], decimal: DecimalMark): boolean {
   return true;
 }
 
-function splitLines(text: string): string[] {
-  return text.split(/\r\n|\r|\n/);
+const LF = 10;
+const CR = 13;
+
+/**
+ * Each line of `text` with its 0-based index, split at CRLF, CR or LF as `split` would, but one at a
+ * time: an array of every line of a large file would hold a second copy of it for the whole read.
+ */
+function* eachLine(text: string): Generator<[number, string]> {
+  const n = text.length;
+  let start = 0;
+  for (let i = 0; ; i++) {
+    let end = start;
+    while (end < n && text.charCodeAt(end) !== LF && text.charCodeAt(end) !== CR) end++;
+    yield [i, text.slice(start, end)];
+    if (end >= n) return;
+    start = end + (text.charCodeAt(end) === CR && text.charCodeAt(end + 1) === LF ? 2 : 1);
+  }
+}
+
+/** The lines of `text` from the last one back, split as `eachLine` splits them. */
+function* eachLineBackwards(text: string): Generator<string> {
+  let end = text.length;
+  for (;;) {
+    let start = end;
+    while (start > 0 && text.charCodeAt(start - 1) !== LF && text.charCodeAt(start - 1) !== CR) start--;
+    yield text.slice(start, end);
+    if (start === 0) return;
+    end = start - 1;
+    if (text.charCodeAt(end) === LF && end > 0 && text.charCodeAt(end - 1) === CR) end--;
+  }
 }
 
 function lineEnding(text: string): ParseSettings['lineEnding'] {
@@ -123,15 +151,17 @@ function lineEnding(text: string): ParseSettings['lineEnding'] {
 }
 
 /** Scores each separator/decimal pair on a sample from both ends of the file (preamble at the top, data below). */
-function chooseScheme(lines: string[], options: ParseOptions): Scheme | null {
+function chooseScheme(text: string, options: ParseOptions): Scheme | null {
   const sample: string[] = [];
-  for (let i = 0; i < lines.length && sample.length < 100; i++) {
-    const t = lines[i].trim();
+  for (const [, line] of eachLine(text)) {
+    if (sample.length >= 100) break;
+    const t = line.trim();
     if (t && !isComment(t)) sample.push(t);
   }
   let tail = 0;
-  for (let i = lines.length - 1; i >= 0 && tail < 100; i--) {
-    const t = lines[i].trim();
+  for (const line of eachLineBackwards(text)) {
+    if (tail >= 100) break;
+    const t = line.trim();
     if (t && !isComment(t)) {
       sample.push(t);
       tail++;
@@ -181,7 +211,7 @@ function chooseLayout(
   count: number,
   firstLine: number,
   headerIndex: number,
-  lines: string[],
+  headerRaw: string,
   separator: Separator,
   options: ParseOptions,
   warnings: string[],
@@ -190,11 +220,11 @@ function chooseLayout(
   let headerLine: number | null = null;
   let headerText: string | null = null;
   if (headerIndex >= 0) {
-    const titles = splitHeader(lines[headerIndex], count, separator);
+    const titles = splitHeader(headerRaw, count, separator);
     mapping = titles ? mapHeader(titles, kind) : null;
     if (mapping) {
       headerLine = headerIndex + 1;
-      headerText = lines[headerIndex].trim();
+      headerText = headerRaw.trim();
     } else if (titles || !options.columns) {
       warnings.push(`line ${headerIndex + 1} was not read as a column header`);
     }
@@ -279,10 +309,9 @@ function parseUnsafe(input: ParseInput, state: { line: number | null }): ParseRe
 
   const decoded = decodeText(bytes);
   const text = decoded.text;
-  const lines = splitLines(text);
-  if (lines.every((l) => l.trim() === '')) reject('empty', null, 'file', 'file holds no text');
+  if (text.trim() === '') reject('empty', null, 'file', 'file holds no text');
 
-  const scheme = chooseScheme(lines, options);
+  const scheme = chooseScheme(text, options);
   if (!scheme) reject('no_data', null, 'file', 'no lines of numbers found');
   const { separator, decimal } = scheme;
 
@@ -295,6 +324,7 @@ function parseUnsafe(input: ParseInput, state: { line: number | null }): ParseRe
   let layout: Layout | null = null;
   let count = 0;
   let headerIndex = -1;
+  let headerRaw = '';
   let firstDataLine = 0;
   let lastDataLine = 0;
   let xMul = 1;
@@ -313,24 +343,24 @@ function parseUnsafe(input: ParseInput, state: { line: number | null }): ParseRe
     return v;
   };
 
-  for (let i = 0; i < lines.length; i++) {
+  for (const [i, line] of eachLine(text)) {
     const lineNo = i + 1;
     state.line = lineNo;
-    const trimmed = lines[i].trim();
+    const trimmed = line.trim();
     if (trimmed === '') continue;
     if (isComment(trimmed)) {
-      if (layout === null && LETTER.test(trimmed)) headerIndex = i;
+      if (layout === null && LETTER.test(trimmed)) [headerIndex, headerRaw] = [i, line];
       continue;
     }
     const tokens = tokenize(trimmed, separator);
     if (layout === null) {
       if (!isDataLine(tokens, decimal)) {
-        if (LETTER.test(trimmed)) headerIndex = i;
+        if (LETTER.test(trimmed)) [headerIndex, headerRaw] = [i, line];
         continue;
       }
       count = tokens.length;
       firstDataLine = lineNo;
-      layout = chooseLayout(input.kind, count, lineNo, headerIndex, lines, separator, options, warnings);
+      layout = chooseLayout(input.kind, count, lineNo, headerIndex, headerRaw, separator, options, warnings);
       xUnit = resolveXUnit(kind, layout, options, warnings);
       yUnit = resolveYUnit(kind, layout, options, warnings);
       phaseUnit = layout.headerPhaseUnit ?? 'deg';

@@ -5,9 +5,19 @@ import { isErrorEnvelope } from '../../../shared/api/errors';
 import { apiBase, ApiRequestError, sendJson } from '../../ui';
 
 export type UploadResult =
-  | { fileName: string; ok: true; token: string; points: { x: number[]; y: number[]; phase: number[] | null }; settings: ParseSettings; warnings: string[] }
+  | {
+      fileName: string;
+      ok: true;
+      token: string;
+      /** Acoustic curves on the catalogue's grid, other kinds thinned: enough to draw, not every point. */
+      preview: { x: number[]; y: number[]; phase: number[] | null };
+      /** How many points the file held, and the line saying what was read. */
+      pointCount: number;
+      summary: string;
+      settings: ParseSettings;
+      warnings: string[];
+    }
   | { fileName: string; ok: false; error: ParseError };
-
 
 /**
  * Sends one file to be read. XMLHttpRequest rather than fetch because only it reports upload

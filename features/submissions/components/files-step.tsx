@@ -2,7 +2,7 @@ import * as DocumentPicker from 'expo-document-picker';
 import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import { ActionButton, ChoiceToggle, colors, fonts, NumberField, radius, space, TextField } from '../../ui';
-import { DISTORTION_KINDS } from '../../../shared/uploads';
+import { DISTORTION_KINDS, UPLOAD_LIMITS } from '../../../shared/uploads';
 import type { SubmissionDraft } from '../hooks/use-submission-draft';
 import { extraHarmonics, fileMeta, kindNeeds, UPLOAD_KINDS, type DraftFile, type FileSettings } from '../logic/draft';
 
@@ -104,6 +104,8 @@ function FileRow({ file, all, draft }: { file: DraftFile; all: readonly DraftFil
   );
 }
 
+const mb = (bytes: number) => bytes / 1024 / 1024;
+
 /** Step 3: the curve files, each read by the server as soon as it is added. */
 export function FilesStep({ draft }: { draft: SubmissionDraft }) {
   const [pickError, setPickError] = useState<string | null>(null);
@@ -126,7 +128,9 @@ export function FilesStep({ draft }: { draft: SubmissionDraft }) {
   return (
     <View style={styles.gap} testID="submit-step-files">
       <Text style={styles.meta}>
-        Text or CSV exports: frequency and value, optionally phase; any common separator, decimal commas, kHz or Hz, % or dB. Up to 5 MB each. Name
+        Text or CSV exports: frequency and value, optionally phase; any common separator, decimal commas, kHz or Hz, % or dB. Up to {mb(UPLOAD_LIMITS.fileBytes)} MB
+        a file and {UPLOAD_LIMITS.curvesPerSubmission} curves a submission; one upload request takes at most {UPLOAD_LIMITS.files} files and{' '}
+        {mb(UPLOAD_LIMITS.requestBytes)} MB. Name
         a file like &ldquo;spl-30deg.txt&rdquo; or &ldquo;thd-5.66V.csv&rdquo; and its kind, angle or level is filled in for you.
       </Text>
       <ActionButton label={files.length ? 'Add more files' : 'Choose files'} onPress={choose} testID="submit-choose-files" />

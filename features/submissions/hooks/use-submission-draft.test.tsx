@@ -26,7 +26,9 @@ const server = setupServer(
       return HttpResponse.json({ files: [{ fileName: file.name, ok: false, error: { file: file.name, line: 212, reason: 'non_numeric', message: `"${file.name}", line 212: non-numeric value "abc"` } }] });
     }
     const x = Array.from({ length: 10 }, (_, i) => 100 * (i + 1));
-    return HttpResponse.json({ files: [{ fileName: file.name, ok: true, token: 'f'.repeat(32), points: { x, y: x.map(() => 85), phase: null }, settings, warnings: [] }] });
+    // The reply carries a preview, not every point read, and says itself what was read.
+    const preview = { x, y: x.map(() => 85), phase: null };
+    return HttpResponse.json({ files: [{ fileName: file.name, ok: true, token: 'f'.repeat(32), preview, pointCount: 2000, summary: '2000 points, 100–1000 Hz, tab-separated', settings, warnings: [] }] });
   }),
   http.get('*/api/submissions/near-duplicates', ({ request }) => {
     nearQueries.push(new URL(request.url).searchParams);
@@ -51,7 +53,8 @@ describe('useSubmissionDraft', () => {
     await waitFor(() => expect(result.current.draft.files[0].status).toBe('read'));
     expect(metas).toEqual([{ kind: 'spl', angleDeg: 30, driveLevelV: null }]);
     expect(result.current.draft.files[0]).toMatchObject({ token: 'f'.repeat(32), progress: 1 });
-    expect(result.current.draft.files[0].summary).toMatch(/^10 points, 100–1000 Hz, tab-separated/);
+    expect(result.current.draft.files[0].summary).toBe('2000 points, 100–1000 Hz, tab-separated');
+    expect(result.current.draft.files[0].points?.x).toHaveLength(10);
   });
 
   it('reads the file again when its description changes, and not while it is incomplete', async () => {

@@ -1,5 +1,5 @@
 import { useCallback, useEffect, useReducer, useRef } from 'react';
-import { DEFAULT_MAX_BYTES, parseSummary } from '../../../shared/uploads';
+import { UPLOAD_LIMITS } from '../../../shared/uploads';
 import { ApiRequestError } from '../../ui';
 import { uploadFile } from '../api/submissions-api';
 import { emptyDraft, fileMeta, guessFileMeta, type Draft, type DraftFile, type DriverChoice, type MethodText } from '../logic/draft';
@@ -49,11 +49,11 @@ export function useSubmissionDraft() {
       const id = `file-${++nextId.current}`;
       blobs.current.set(id, p.blob);
       const guess = guessFileMeta(p.name);
-      const tooBig = p.size > DEFAULT_MAX_BYTES;
+      const tooBig = p.size > UPLOAD_LIMITS.fileBytes;
       return {
         id, name: p.name, size: p.size, ...guess, settings: { columns: '', xUnit: 'auto', distortionUnit: 'auto' }, warnings: [], progress: 0,
         status: tooBig ? 'failed' : 'reading',
-        ...(tooBig ? { error: { line: null, message: `${p.name}: ${megabytes(p.size)} is over the ${megabytes(DEFAULT_MAX_BYTES)} limit` }, readWith: 'too-big' } : {}),
+        ...(tooBig ? { error: { line: null, message: `${p.name}: ${megabytes(p.size)} is over the ${megabytes(UPLOAD_LIMITS.fileBytes)} limit` }, readWith: 'too-big' } : {}),
       };
     });
     dispatch({ type: 'add', files });
@@ -75,8 +75,7 @@ export function useSubmissionDraft() {
         .then((r) => {
           if (inFlight.current.get(f.id) !== key) return;
           if (r.ok) {
-            const summary = parseSummary({ ok: true, points: r.points, settings: r.settings, warnings: r.warnings });
-            dispatch({ type: 'file', id: f.id, patch: { status: 'read', token: r.token, points: r.points, summary, warnings: r.warnings, header: r.settings.headerText, readWith: key, progress: 1 } });
+            dispatch({ type: 'file', id: f.id, patch: { status: 'read', token: r.token, points: r.preview, summary: r.summary, warnings: r.warnings, header: r.settings.headerText, readWith: key, progress: 1 } });
           } else {
             dispatch({ type: 'file', id: f.id, patch: { status: 'failed', token: undefined, points: undefined, error: { line: r.error.line, message: r.error.message }, readWith: key, progress: 1 } });
           }

@@ -49,6 +49,7 @@ export interface DraftFile {
   /** 0..1 of the bytes sent. */
   progress: number;
   token?: string;
+  /** The server's preview: acoustic curves on the common grid, others thinned; not every point read. */
   points?: ParsedPreview;
   summary?: string;
   warnings: string[];
